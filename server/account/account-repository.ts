@@ -1,0 +1,20 @@
+import { eq } from 'drizzle-orm';
+import type { Db } from '../db/database.ts';
+import { users } from '../db/schema.ts';
+
+export function createAccountRepository(db: Db) {
+  return {
+    async findById(id: string) {
+      const [row] = await db
+        .select({ id: users.id, name: users.name, email: users.email, emailVerified: users.emailVerified, role: users.role, units: users.units })
+        .from(users)
+        .where(eq(users.id, id));
+      return row;
+    },
+    async setUnits(id: string, units: string) {
+      await db.update(users).set({ units, updatedAt: new Date() }).where(eq(users.id, id));
+    },
+  };
+}
+
+export type AccountRepository = ReturnType<typeof createAccountRepository>;

@@ -1,0 +1,58 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { toNodeHandler } from 'better-auth/node';
+import { createAccountRepository } from './account/account-repository.ts';
+import { createAccountUseCases } from './account/account-use-cases.ts';
+import { createAdminUseCases } from './admin/admin-use-cases.ts';
+import { createUserDirectory } from './admin/user-directory.ts';
+import type { Auth } from './auth/auth.ts';
+import type { Database } from './db/database.ts';
+import { serveClient } from './http/client-files.ts';
+import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { loadSession } from './http/session.ts';
+import type { MailCapture } from './mail/mail-capture.ts';
+import { accountRoutes } from './routes/account-routes.ts';
+import { adminRoutes } from './routes/admin-routes.ts';
+import { devMailRoutes } from './routes/dev-mail-routes.ts';
+import { healthRoutes } from './routes/health-routes.ts';
+
+export interface AppDeps {
+  database: Database;
+  auth: Auth;
+  version: string;
+  /** Present when mail goes to the local capture server: enables the dev mailbox. */
+  mailCapture?: MailCapture;
+  /** Folder of the built client; omitted in API tests. */
+  clientDir?: string;
+}
+
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: null, imgSrc: ["'self'", 'data:', 'blob:'] } },
+      // Makers open the app over plain http on their own machine or LAN.
+      strictTransportSecurity: false,
+    }),
+  );
+
+  // better-auth reads its own request bodies, so it is mounted before the JSON parser.
+  app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
+  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api/health', healthRoutes(deps.database, deps.version));
+  app.get('/api/app-info', (_req, res) => {
+    res.json({ name: 'Canwright', version: deps.version, devMailbox: Boolean(deps.mailCapture) });
+  });
+  app.use('/api', loadSession(deps.auth));
+
+  const db = deps.database.db;
+  app.use('/api/account', accountRoutes(createAccountUseCases(createAccountRepository(db))));
+  app.use('/api/admin', adminRoutes(createAdminUseCases(deps.auth, createUserDirectory(db))));
+  if (deps.mailCapture) app.use('/api/dev/mail', devMailRoutes(deps.mailCapture));
+  app.use('/api', apiNotFound);
+
+  if (deps.clientDir) serveClient(app, deps.clientDir);
+  app.use(errorHandler);
+  return app;
+}

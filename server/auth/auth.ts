@@ -1,0 +1,66 @@
+import { betterAuth } from 'better-auth';
+import { drizzleAdapter } from 'better-auth/adapters/drizzle';
+import { admin } from 'better-auth/plugins';
+import type { Db } from '../db/database.ts';
+import { schema } from '../db/schema.ts';
+import type { Mailer } from '../mail/mailer.ts';
+import { passwordResetMail, verificationMail } from '../mail/messages.ts';
+import { accessControl, authRoles } from './roles.ts';
+
+export interface AuthConfig {
+  db: Db;
+  mailer: Mailer;
+  secret: string;
+  /** Public URL of the app, e.g. http://localhost:3000; links in mail point here. */
+  baseURL: string;
+  /** Other origins a browser may send sign-in requests from (e.g. 127.0.0.1 beside localhost). */
+  trustedOrigins: string[];
+  /** better-auth's own rate limit; on in production. */
+  rateLimit: boolean;
+}
+
+export function createAuth(config: AuthConfig) {
+  return betterAuth({
+    appName: 'Canwright',
+    baseURL: config.baseURL,
+    basePath: '/api/auth',
+    secret: config.secret,
+    trustedOrigins: config.trustedOrigins,
+    telemetry: { enabled: false },
+    rateLimit: { enabled: config.rateLimit },
+    database: drizzleAdapter(config.db, { provider: 'pg', schema, usePlural: true }),
+    user: {
+      additionalFields: {
+        units: { type: 'string', required: false, defaultValue: 'in', input: false },
+      },
+    },
+    emailAndPassword: {
+      enabled: true,
+      requireEmailVerification: true,
+      // NIST SP 800-63B: at least 8 characters, no composition rules.
+      minPasswordLength: 8,
+      revokeSessionsOnPasswordReset: true,
+      async sendResetPassword({ user, url }) {
+        await config.mailer.send(passwordResetMail(user.email, user.name, url));
+      },
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      sendOnSignIn: true,
+      async sendVerificationEmail({ user, url }) {
+        await config.mailer.send(verificationMail(user.email, user.name, url));
+      },
+    },
+    plugins: [
+      admin({
+        defaultRole: 'maker',
+        adminRoles: ['admin'],
+        ac: accessControl,
+        roles: authRoles,
+        bannedUserMessage: 'This account has been disabled. Ask an administrator of this Canwright site.',
+      }),
+    ],
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

@@ -1,0 +1,20 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import express, { type Express } from 'express';
+
+/**
+ * Serves the built SPA: hashed assets cached for a year, index.html never cached, and every
+ * other GET that is not an API route answered with index.html so client routes survive a reload.
+ */
+export function serveClient(app: Express, clientDir: string): void {
+  const indexHtml = join(clientDir, 'index.html');
+  app.use('/assets', express.static(join(clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+  app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+  app.get('/{*splat}', (_req, res) => {
+    if (!existsSync(indexHtml)) {
+      res.status(503).type('text').send('The Canwright client is not built. Run `npm start` (it builds it) or `npm run build`.');
+      return;
+    }
+    res.set('Cache-Control', 'no-cache').sendFile(indexHtml);
+  });
+}

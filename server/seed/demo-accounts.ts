@@ -1,0 +1,19 @@
+import type { Role } from '../../shared/account/roles.ts';
+
+/**
+ * The demo: Alder Street Makerspace, an invented community workshop that runs a
+ * "build your own camp stove" evening. Passwords are public on purpose; demo seeding is
+ * off in production unless SEED_DEMO=true.
+ */
+export interface DemoAccount {
+  name: string;
+  email: string;
+  password: string;
+  role: Role;
+}
+
+export const demoAccounts: DemoAccount[] = [
+  { name: 'Robin Maker', email: 'maker@alder-street.example', password: 'demo-maker-stove', role: 'maker' },
+  { name: 'Jo Instructor', email: 'instructor@alder-street.example', password: 'demo-instructor-stove', role: 'instructor' },
+  { name: 'Sam Admin', email: 'admin@alder-street.example', password: 'demo-admin-stove', role: 'admin' },
+];

@@ -1,0 +1,116 @@
+import { randomBytes } from 'node:crypto';
+import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { createApp } from './app.ts';
+import { createAuth, type Auth } from './auth/auth.ts';
+import { openDatabase, type Database, type DatabaseTarget } from './db/database.ts';
+import { startMailCapture, type MailCapture } from './mail/mail-capture.ts';
+import { createMailer, type Mailer } from './mail/mailer.ts';
+import { seedDemo } from './seed/seed-demo.ts';
+import { version } from './version.ts';
+
+export interface ServerOptions {
+  database: DatabaseTarget;
+  port: number;
+  host: string;
+  /** Public base URL; when omitted, http://localhost:<bound port>. */
+  publicUrl?: string;
+  secret?: string;
+  /** Real SMTP server; when omitted, mail goes to a local capture server that the app starts. */
+  smtpUrl?: string;
+  mailFrom?: string;
+  seedDemo?: boolean;
+  clientDir?: string;
+  rateLimit?: boolean;
+}
+
+export interface RunningServer {
+  url: string;
+  port: number;
+  database: Database;
+  auth: Auth;
+  /** Present when mail is captured locally. */
+  mail?: MailCapture;
+  seeded: string[];
+  close(): Promise<void>;
+}
+
+/** Opens the database, migrates, seeds, starts mail and serves the app. Used by main and by tests. */
+export async function startServer(options: ServerOptions): Promise<RunningServer> {
+  const database = await openDatabase(options.database);
+  let mail: MailCapture | undefined;
+  let mailer: Mailer | undefined;
+  let server: Server | undefined;
+  try {
+    await database.migrate();
+    mail = options.smtpUrl ? undefined : await startMailCapture();
+    mailer = createMailer(options.smtpUrl ?? mail!.url, options.mailFrom ?? 'Canwright <no-reply@canwright.local>');
+
+    // The port is bound before better-auth is made, so that port 0 (tests) still yields a correct base URL.
+    // Requests that arrive before the app is ready are told to retry.
+    let handle: ((req: IncomingMessage, res: ServerResponse) => void) | undefined;
+    server = createServer((req, res) => (handle ? handle(req, res) : res.writeHead(503, { 'Retry-After': '1' }).end('Starting up')));
+    await listen(server, options.port, options.host);
+    const port = (server.address() as AddressInfo).port;
+    const url = (options.publicUrl ?? `http://localhost:${port}`).replace(/\/+$/, '');
+    const auth = createAuth({
+      db: database.db,
+      mailer,
+      secret: options.secret ?? randomBytes(32).toString('hex'),
+      baseURL: url,
+      trustedOrigins: loopbackTwins(url),
+      rateLimit: options.rateLimit ?? false,
+    });
+    const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
+    handle = createApp({ database, auth, version, mailCapture: mail, clientDir: options.clientDir });
+
+    const openServer = server;
+    const openMailer = mailer;
+    const openMail = mail;
+    let closing: Promise<void> | undefined;
+    return {
+      url,
+      port,
+      database,
+      auth,
+      mail,
+      seeded,
+      close() {
+        closing ??= (async () => {
+          openServer.closeAllConnections();
+          await new Promise<void>((resolve) => openServer.close(() => resolve()));
+          openMailer.close();
+          await openMail?.close();
+          await database.close();
+        })();
+        return closing;
+      },
+    };
+  } catch (error) {
+    server?.close();
+    mailer?.close();
+    await mail?.close();
+    await database.close();
+    throw error;
+  }
+}
+
+function listen(server: Server, port: number, host: string): Promise<void> {
+  return new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, host, () => {
+      server.off('error', reject);
+      resolve();
+    });
+  });
+}
+
+/** localhost and 127.0.0.1 are different origins to a browser; accept the twin of the base URL. */
+function loopbackTwins(url: string): string[] {
+  const parsed = new URL(url);
+  const twins: Record<string, string> = { localhost: '127.0.0.1', '127.0.0.1': 'localhost' };
+  const twin = twins[parsed.hostname];
+  if (!twin) return [];
+  parsed.hostname = twin;
+  return [parsed.origin];
+}

@@ -1,0 +1,43 @@
+import { Link } from 'react-router';
+import { Page } from '../../components/page.tsx';
+import { useAccount } from '../account/api/get-account.ts';
+
+const steps = [
+  ['Size the air', 'Primary holes in the bottom against secondary jets near the top, as a ratio you set.'],
+  ['Lay out the holes', 'Even pitch around the can wall and rings on the can bottom, clear of seams and rims.'],
+  ['Check the rules of thumb', 'Jet pitch, metal left between holes, distance from edges, holes that do not fit.'],
+  ['Print true to scale', 'A wrap strip and a bottom disc with a ruler to check before you punch and drill.'],
+] as const;
+
+export function HomePage() {
+  const { data: account } = useAccount();
+  return (
+    <Page title="Canwright" width="wide" intro="Canwright sizes the air holes of a wood-gas can stove, lays them out evenly, checks them, and prints true-scale templates to tape on the can and drill through.">
+      <ol className="grid gap-4 sm:grid-cols-2">
+        {steps.map(([title, text], index) => (
+          <li key={title} className="rounded-lg border border-rule bg-white p-5">
+            <p className="text-sm font-medium text-ember-700">Step {index + 1}</p>
+            <h2 className="mt-1 font-semibold">{title}</h2>
+            <p className="mt-1 text-sm text-ink-soft">{text}</p>
+          </li>
+        ))}
+      </ol>
+      <div className="mt-8 flex flex-wrap gap-3">
+        {account ? (
+          <Link to="/account" className="rounded-md bg-ember-600 px-4 py-2 font-medium text-white hover:bg-ember-700">
+            Go to your account
+          </Link>
+        ) : (
+          <>
+            <Link to="/sign-up" className="rounded-md bg-ember-600 px-4 py-2 font-medium text-white hover:bg-ember-700">
+              Create an account
+            </Link>
+            <Link to="/sign-in" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
+              Sign in
+            </Link>
+          </>
+        )}
+      </div>
+    </Page>
+  );
+}

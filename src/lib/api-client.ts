@@ -1,0 +1,42 @@
+import type { z } from 'zod';
+
+export interface FieldProblem {
+  path: string;
+  message: string;
+}
+
+/** An error answer from the API: status, stable code, message and, for 400s, the bad fields. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: FieldProblem[] = [],
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+  body?: unknown;
+  signal?: AbortSignal;
+}
+
+/** Calls the API and checks the answer against a zod schema. */
+export async function apiRequest<S extends z.ZodType>(path: string, schema: S, options: RequestOptions = {}): Promise<z.output<S>> {
+  const response = await fetch(path, {
+    method: options.method ?? 'GET',
+    headers: options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+    body: options.body === undefined ? undefined : JSON.stringify(options.body),
+    credentials: 'same-origin',
+    signal: options.signal,
+  });
+  const payload: unknown = await response.json().catch(() => undefined);
+  if (!response.ok) {
+    const error = (payload as { error?: { code?: string; message?: string; details?: { fields?: FieldProblem[] } } } | undefined)?.error;
+    throw new ApiError(response.status, error?.code ?? 'HTTP_' + response.status, error?.message ?? `The server answered ${response.status}.`, error?.details?.fields ?? []);
+  }
+  return schema.parse(payload);
+}
