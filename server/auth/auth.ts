@@ -28,6 +28,9 @@ export function createAuth(config: AuthConfig) {
     trustedOrigins: config.trustedOrigins,
     telemetry: { enabled: false },
     rateLimit: { enabled: config.rateLimit },
+    // Explicit, because better-auth turns origin checks off when NODE_ENV is "test": the tests
+    // must exercise the same CSRF protection that production has.
+    advanced: { disableOriginCheck: false, disableCSRFCheck: false },
     database: drizzleAdapter(config.db, { provider: 'pg', schema, usePlural: true }),
     user: {
       additionalFields: {

@@ -17,7 +17,7 @@ export interface MailCapture {
   url: string;
   /** Newest first. */
   list(): CapturedMail[];
-  /** Resolves with the next message sent to `to` (or one already kept). */
+  /** Resolves with the first message to `to` received after message id `after` (kept or still to come). */
   waitFor(to: string, options?: { timeoutMs?: number; after?: number }): Promise<CapturedMail>;
   close(): Promise<void>;
 }
@@ -74,7 +74,7 @@ export async function startMailCapture(): Promise<MailCapture> {
     list: () => [...messages],
     waitFor(to, { timeoutMs = 10_000, after = 0 } = {}) {
       const address = to.toLowerCase();
-      const kept = messages.find((mail) => mail.id > after && mail.to.includes(address));
+      const kept = messages.findLast((mail) => mail.id > after && mail.to.includes(address)); // oldest first
       if (kept) return Promise.resolve(kept);
       return new Promise((resolve, reject) => {
         const waiter = { to: address, after, resolve: (mail: CapturedMail) => (clearTimeout(timer), resolve(mail)) };

@@ -1,0 +1,44 @@
+import { getAuthTables } from 'better-auth/db';
+import { getTableConfig } from 'drizzle-orm/pg-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { schema } from '../../server/db/schema.ts';
+import { demoAccounts } from '../../server/seed/demo-accounts.ts';
+import { seedDemo } from '../../server/seed/seed-demo.ts';
+import { signedInClient } from '../helpers/factories.ts';
+import { startTestServer, type TestServer } from '../helpers/test-server.ts';
+
+let server: TestServer;
+beforeAll(async () => {
+  server = await startTestServer({ seedDemo: true });
+});
+afterAll(() => server.close());
+
+describe('demo seed', () => {
+  it('creates the demo accounts, and the demo sign-ins work with their roles', async () => {
+    expect(server.seeded.sort()).toEqual(demoAccounts.map((a) => a.email).sort());
+    for (const account of demoAccounts) {
+      const http = await signedInClient(server, account);
+      expect((await http.get('/api/account')).body).toMatchObject({ email: account.email, role: account.role, emailVerified: true });
+    }
+  });
+
+  it('is idempotent', async () => {
+    expect((await seedDemo(server.database.db, server.auth)).created).toEqual([]);
+  });
+});
+
+describe('database schema', () => {
+  it('has every table and column better-auth (with the admin plugin) expects', () => {
+    const expected = getAuthTables(server.auth.options);
+    const tables = Object.values(schema).map((table) => getTableConfig(table));
+    for (const model of Object.values(expected)) {
+      const table = tables.find((t) => t.name === `${model.modelName}s`);
+      expect(table, model.modelName).toBeDefined();
+      const columns = new Set(table!.columns.map((column) => column.name));
+      for (const field of Object.keys(model.fields)) {
+        const snake = field.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
+        expect(columns.has(snake), `${table!.name}.${snake}`).toBe(true);
+      }
+    }
+  });
+});

@@ -1,0 +1,53 @@
+/**
+ * A tiny HTTP client for API tests: keeps cookies like a browser, sends the Origin header that
+ * better-auth requires on state-changing requests, and never follows redirects by itself.
+ */
+export interface HttpResponse<T = unknown> {
+  status: number;
+  headers: Headers;
+  body: T;
+}
+
+export class HttpClient {
+  private cookies = new Map<string, string>();
+
+  constructor(readonly baseUrl: string) {}
+
+  get signedIn(): boolean {
+    return [...this.cookies.keys()].some((name) => name.includes('session_token'));
+  }
+
+  async request<T = any>(method: string, path: string, body?: unknown): Promise<HttpResponse<T>> {
+    const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json' };
+    if (body !== undefined) headers['Content-Type'] = 'application/json';
+    if (this.cookies.size) headers.Cookie = [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');
+    const response = await fetch(new URL(path, this.baseUrl), { method, headers, body: body === undefined ? undefined : JSON.stringify(body), redirect: 'manual' });
+    for (const cookie of response.headers.getSetCookie()) {
+      const [pair = '', ...attributes] = cookie.split(';');
+      const index = pair.indexOf('=');
+      const name = pair.slice(0, index).trim();
+      const value = pair.slice(index + 1).trim();
+      const expired = attributes.some((a) => /max-age=0\b/i.test(a.trim())) || value === '';
+      if (expired) this.cookies.delete(name);
+      else this.cookies.set(name, value);
+    }
+    const text = await response.text();
+    let parsed: unknown = text;
+    try {
+      parsed = text ? JSON.parse(text) : undefined;
+    } catch {
+      // not JSON: keep the text
+    }
+    return { status: response.status, headers: response.headers, body: parsed as T };
+  }
+
+  get<T = any>(path: string) {
+    return this.request<T>('GET', path);
+  }
+  post<T = any>(path: string, body: unknown = {}) {
+    return this.request<T>('POST', path, body);
+  }
+  patch<T = any>(path: string, body: unknown) {
+    return this.request<T>('PATCH', path, body);
+  }
+}

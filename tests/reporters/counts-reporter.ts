@@ -1,0 +1,32 @@
+import type { Reporter, TestModule } from 'vitest/node';
+
+/**
+ * Prints how many tests passed, failed and were skipped in each layer (unit, api, browser...),
+ * then one closing line "N passed, N failed, N skipped" for CI logs.
+ */
+export default class CountsReporter implements Reporter {
+  onTestRunEnd(testModules: ReadonlyArray<TestModule>): void {
+    const byProject = new Map<string, { passed: number; failed: number; skipped: number }>();
+    for (const module of testModules) {
+      const counts = byProject.get(module.project.name) ?? { passed: 0, failed: 0, skipped: 0 };
+      for (const test of module.children.allTests()) {
+        const state = test.result().state;
+        if (state === 'passed') counts.passed++;
+        else if (state === 'failed') counts.failed++;
+        else counts.skipped++;
+      }
+      // A file that failed to load has no tests but must still count as a failure.
+      if (module.state() === 'failed' && [...module.children.allTests()].length === 0) counts.failed++;
+      byProject.set(module.project.name, counts);
+    }
+    const total = { passed: 0, failed: 0, skipped: 0 };
+    console.log('\nTests by layer:');
+    for (const [name, counts] of [...byProject].sort(([a], [b]) => a.localeCompare(b))) {
+      console.log(`  ${name.padEnd(14)} ${counts.passed} passed, ${counts.failed} failed, ${counts.skipped} skipped`);
+      total.passed += counts.passed;
+      total.failed += counts.failed;
+      total.skipped += counts.skipped;
+    }
+    console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
+  }
+}

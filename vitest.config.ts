@@ -1,0 +1,24 @@
+import { defineConfig } from 'vitest/config';
+
+/**
+ * Test layers, each a vitest project: unit (pure code), api (the server in-process over HTTP,
+ * a fresh in-memory PGlite per file), api-postgres (the same files against a real PostgreSQL
+ * server, when TEST_DATABASE_URL is set), process (npm start as a real process) and browser
+ * (Chromium through playwright-core).
+ */
+const postgres = process.env.TEST_DATABASE_URL
+  ? [{ test: { name: 'api-postgres', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000, env: { TEST_DB: 'postgres' } } }]
+  : [];
+
+export default defineConfig({
+  test: {
+    reporters: ['default', './tests/reporters/counts-reporter.ts'],
+    projects: [
+      { test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'shared/**/*.test.ts'] } },
+      { test: { name: 'api', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000 } },
+      ...postgres,
+      { test: { name: 'process', include: ['tests/process/**/*.test.ts'], globalSetup: ['tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000 } },
+      { test: { name: 'browser', include: ['tests/browser/**/*.test.ts'], globalSetup: ['tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000, fileParallelism: false } },
+    ],
+  },
+});
