@@ -1,6 +1,7 @@
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import { admin } from 'better-auth/plugins';
+import { verifyCallbackUrl } from '../../shared/account/links.ts';
 import type { Db } from '../db/database.ts';
 import { schema } from '../db/schema.ts';
 import type { Mailer } from '../mail/mailer.ts';
@@ -51,7 +52,7 @@ export function createAuth(config: AuthConfig) {
       sendOnSignUp: true,
       sendOnSignIn: true,
       async sendVerificationEmail({ user, url }) {
-        await config.mailer.send(verificationMail(user.email, user.name, url));
+        await config.mailer.send(verificationMail(user.email, user.name, landOnVerifyPage(url)));
       },
     },
     plugins: [
@@ -64,6 +65,18 @@ export function createAuth(config: AuthConfig) {
       }),
     ],
   });
+}
+
+/**
+ * A verification link always lands on the "address confirmed" page, also when it was sent on a
+ * sign-in attempt (where the client gives no callback URL, since a successful sign-in would
+ * follow it).
+ */
+function landOnVerifyPage(link: string): string {
+  const url = new URL(link);
+  const callback = url.searchParams.get('callbackURL');
+  if (!callback || callback === '/') url.searchParams.set('callbackURL', verifyCallbackUrl);
+  return url.toString();
 }
 
 export type Auth = ReturnType<typeof createAuth>;

@@ -18,8 +18,8 @@ export function AccountPage() {
             <dt className="text-ink-soft">Name</dt>
             <dd>{account.name}</dd>
             <dt className="text-ink-soft">E-mail</dt>
-            <dd className="break-all">
-              {account.email} {account.emailVerified && <span className="text-ok">(confirmed)</span>}
+            <dd>
+              <span className="[overflow-wrap:anywhere]">{account.email}</span> {account.emailVerified && <span className="whitespace-nowrap text-ok">(confirmed)</span>}
             </dd>
             <dt className="text-ink-soft">Role</dt>
             <dd>{roleLabels[account.role]}</dd>

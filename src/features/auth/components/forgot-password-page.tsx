@@ -8,7 +8,7 @@ import { Page } from '../../../components/page.tsx';
 import { TextField } from '../../../components/text-field.tsx';
 import { authClient, authErrorMessage } from '../../../lib/auth-client.ts';
 import { emailFormSchema } from '../form-schemas.ts';
-import { resetPasswordPath } from '../links.ts';
+import { resetPasswordPath } from '../../../../shared/account/links.ts';
 
 type EmailForm = z.infer<typeof emailFormSchema>;
 

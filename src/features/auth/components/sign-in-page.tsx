@@ -11,7 +11,6 @@ import { TextField } from '../../../components/text-field.tsx';
 import { authClient, authErrorMessage } from '../../../lib/auth-client.ts';
 import { accountQueryKey } from '../../account/api/get-account.ts';
 import { signInFormSchema } from '../form-schemas.ts';
-import { verifyCallbackUrl } from '../links.ts';
 
 type SignInForm = z.infer<typeof signInFormSchema>;
 
@@ -29,7 +28,7 @@ export function SignInPage() {
 
   async function onSubmit(form: SignInForm) {
     setFailure(undefined);
-    const { error } = await authClient.signIn.email({ email: form.email, password: form.password, callbackURL: verifyCallbackUrl });
+    const { error } = await authClient.signIn.email({ email: form.email, password: form.password });
     if (error) return setFailure(authErrorMessage(error, 'Signing in failed.'));
     await queryClient.invalidateQueries({ queryKey: accountQueryKey });
     await navigate(safeNext(params.get('next')), { replace: true });

@@ -9,7 +9,7 @@ import { Page } from '../../../components/page.tsx';
 import { TextField } from '../../../components/text-field.tsx';
 import { authClient, authErrorMessage } from '../../../lib/auth-client.ts';
 import { signUpFormSchema } from '../form-schemas.ts';
-import { verifyCallbackUrl } from '../links.ts';
+import { verifyCallbackUrl } from '../../../../shared/account/links.ts';
 
 type SignUpForm = z.infer<typeof signUpFormSchema>;
 

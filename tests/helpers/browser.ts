@@ -1,0 +1,36 @@
+import { existsSync, mkdirSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext } from 'playwright-core';
+import { repoRoot } from './processes.ts';
+
+/** Debian's Chromium, or CHROMIUM_PATH. Browser tests never download a browser. */
+export const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+export const hasChromium = existsSync(chromiumPath);
+
+/**
+ * Where Chromium is missing the browser tests are skipped with a message, except on CI
+ * (CI=true), where a missing browser is a failure.
+ */
+export function browserAvailability(): { skip: boolean } {
+  if (hasChromium) return { skip: false };
+  if (process.env.CI === 'true') throw new Error(`CI=true but Chromium is not at ${chromiumPath}: install it (apt-get install -y chromium) or set CHROMIUM_PATH.`);
+  console.warn(`[browser] Chromium not found at ${chromiumPath}: browser tests are skipped. Install it with apt-get install -y chromium, or set CHROMIUM_PATH.`);
+  return { skip: true };
+}
+
+export async function launchBrowser(viewport = { width: 1280, height: 800 }): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), 'canwright-chromium-')), {
+    executablePath: chromiumPath,
+    headless: true,
+    viewport,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+/** Screenshots are kept as test artifacts in test-results/browser/. */
+export function artifactPath(name: string): string {
+  const dir = join(repoRoot, 'test-results', 'browser');
+  mkdirSync(dir, { recursive: true });
+  return join(dir, name);
+}
