@@ -22,6 +22,7 @@ export interface ServerOptions {
   seedDemo?: boolean;
   clientDir?: string;
   rateLimit?: boolean;
+  quiet?: boolean;
 }
 
 export interface RunningServer {
@@ -60,6 +61,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       baseURL: url,
       trustedOrigins: loopbackTwins(url),
       rateLimit: options.rateLimit ?? false,
+      quiet: options.quiet,
     });
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
     handle = createApp({ database, auth, version, mailCapture: mail, clientDir: options.clientDir });

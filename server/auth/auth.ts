@@ -18,6 +18,8 @@ export interface AuthConfig {
   trustedOrigins: string[];
   /** better-auth's own rate limit; on in production. */
   rateLimit: boolean;
+  /** Silence better-auth's log (tests provoke its warnings on purpose). */
+  quiet?: boolean;
 }
 
 export function createAuth(config: AuthConfig) {
@@ -28,6 +30,7 @@ export function createAuth(config: AuthConfig) {
     secret: config.secret,
     trustedOrigins: config.trustedOrigins,
     telemetry: { enabled: false },
+    logger: { disabled: config.quiet ?? false },
     rateLimit: { enabled: config.rateLimit },
     // Explicit, because better-auth turns origin checks off when NODE_ENV is "test": the tests
     // must exercise the same CSRF protection that production has.

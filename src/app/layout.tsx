@@ -3,7 +3,6 @@ import { Link, NavLink, Outlet, useNavigate } from 'react-router';
 import { SafetyNote } from '../components/safety-note.tsx';
 import { accountQueryKey, useAccount } from '../features/account/api/get-account.ts';
 import { useAppInfo } from '../features/app-info/api/get-app-info.ts';
-import { authClient } from '../lib/auth-client.ts';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `rounded-md px-3 py-2 text-sm font-medium ${isActive ? 'bg-ember-50 text-ember-700' : 'text-ink hover:bg-ember-50'}`;
@@ -15,6 +14,7 @@ export function Layout() {
   const navigate = useNavigate();
 
   async function signOut() {
+    const { authClient } = await import('../lib/auth-client.ts');
     await authClient.signOut();
     queryClient.setQueryData(accountQueryKey, null);
     queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== 'account' && query.queryKey[0] !== 'app-info' });

@@ -12,7 +12,7 @@ export interface TestServer extends RunningServer {
 /** The whole app in this process on a free loopback port, a fresh database and captured mail. */
 export async function startTestServer(options: Partial<ServerOptions> = {}): Promise<TestServer> {
   const database = await createTestDatabase();
-  const server = await startServer({ database: database.target, port: 0, host: '127.0.0.1', seedDemo: false, ...options });
+  const server = await startServer({ database: database.target, port: 0, host: '127.0.0.1', seedDemo: false, quiet: true, ...options });
   if (!server.mail) throw new Error('test servers capture mail locally');
   return {
     ...server,

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import type { UnitSystem } from '../../../../shared/account/preferences.ts';
 import { Notice } from '../../../components/notice.tsx';
 import { useUpdatePreferences } from '../api/update-preferences.ts';
@@ -9,12 +10,18 @@ const choices: { value: UnitSystem; label: string; example: string }[] = [
 
 export function UnitsPreference({ current }: { current: UnitSystem }) {
   const update = useUpdatePreferences();
+  // The choice shows at once; it falls back to the saved value if saving fails.
+  const [selected, setSelected] = useState(current);
+  function choose(units: UnitSystem) {
+    setSelected(units);
+    update.mutate({ units }, { onError: () => setSelected(current) });
+  }
   return (
     <section aria-labelledby="units-heading" className="rounded-lg border border-rule bg-white p-5">
       <h2 id="units-heading" className="text-lg font-semibold">
         Units
       </h2>
-      <fieldset className="mt-3 flex flex-col gap-2" disabled={update.isPending}>
+      <fieldset className="mt-3 flex flex-col gap-2">
         <legend className="text-sm text-ink-soft">Show and enter lengths in</legend>
         {choices.map((choice) => (
           <label key={choice.value} className="flex cursor-pointer items-start gap-3 rounded-md p-2 hover:bg-ember-50">
@@ -22,8 +29,8 @@ export function UnitsPreference({ current }: { current: UnitSystem }) {
               type="radio"
               name="units"
               value={choice.value}
-              checked={(update.variables?.units ?? current) === choice.value}
-              onChange={() => update.mutate({ units: choice.value })}
+              checked={selected === choice.value}
+              onChange={() => choose(choice.value)}
               className="mt-1 accent-ember-600"
             />
             <span>
