@@ -18,7 +18,7 @@ export default defineConfig({
       { test: { name: 'api', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000 } },
       ...postgres,
       { test: { name: 'process', include: ['tests/process/**/*.test.ts'], globalSetup: ['tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000 } },
-      { test: { name: 'browser', include: ['tests/browser/**/*.test.ts'], globalSetup: ['tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000, fileParallelism: false } },
+      { test: { name: 'browser', include: ['tests/browser/**/*.test.ts'], globalSetup: ['tests/setup/check-browser.ts', 'tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000, fileParallelism: false } },
     ],
   },
 });

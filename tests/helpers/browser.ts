@@ -15,7 +15,6 @@ export const hasChromium = existsSync(chromiumPath);
 export function browserAvailability(): { skip: boolean } {
   if (hasChromium) return { skip: false };
   if (process.env.CI === 'true') throw new Error(`CI=true but Chromium is not at ${chromiumPath}: install it (apt-get install -y chromium) or set CHROMIUM_PATH.`);
-  console.warn(`[browser] Chromium not found at ${chromiumPath}: browser tests are skipped. Install it with apt-get install -y chromium, or set CHROMIUM_PATH.`);
   return { skip: true };
 }
 

@@ -1,11 +1,11 @@
-import type { Reporter, TestModule } from 'vitest/node';
+import type { Reporter, SerializedError, TestModule } from 'vitest/node';
 
 /**
  * Prints how many tests passed, failed and were skipped in each layer (unit, api, browser...),
  * then one closing line "N passed, N failed, N skipped" for CI logs.
  */
 export default class CountsReporter implements Reporter {
-  onTestRunEnd(testModules: ReadonlyArray<TestModule>): void {
+  onTestRunEnd(testModules: ReadonlyArray<TestModule>, unhandledErrors: ReadonlyArray<SerializedError>): void {
     const byProject = new Map<string, { passed: number; failed: number; skipped: number }>();
     for (const module of testModules) {
       const counts = byProject.get(module.project.name) ?? { passed: 0, failed: 0, skipped: 0 };
@@ -27,6 +27,9 @@ export default class CountsReporter implements Reporter {
       total.failed += counts.failed;
       total.skipped += counts.skipped;
     }
+    // Errors outside any test (a failing global setup, say) fail the run too.
+    if (unhandledErrors.length) console.log(`  ${'(outside tests)'.padEnd(14)} ${unhandledErrors.length} errors`);
+    total.failed += unhandledErrors.length;
     console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
   }
 }
