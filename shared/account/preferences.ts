@@ -1,8 +1,8 @@
 import { z } from 'zod';
+import { unitSystems } from '../units/length.ts';
 
-/** Length units a maker reads and types: inches (with fractions) or millimetres. */
-export const unitSystemSchema = z.enum(['in', 'mm']);
-export type UnitSystem = z.infer<typeof unitSystemSchema>;
+export const unitSystemSchema = z.enum(unitSystems);
+export type { UnitSystem } from '../units/length.ts';
 
 export const preferencesSchema = z.object({ units: unitSystemSchema }).strict();
 export type Preferences = z.infer<typeof preferencesSchema>;

@@ -1,0 +1,2 @@
+export * from './design-schema.ts';
+export { validateDesign, type DesignProblem, type DesignValidation } from './validate-design.ts';

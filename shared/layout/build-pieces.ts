@@ -1,0 +1,107 @@
+import type { Design, Part } from '../design/design-schema.ts';
+import { resolveDrill, type DrillLookup } from './drill-lookup.ts';
+import { placeEndPattern } from './end-pattern.ts';
+import type { DiscPiece, Hole, Mark, Piece, WrapStripPiece } from './layout-types.ts';
+import { normalizeDeg } from './angles.ts';
+import { placeSideRow } from './side-row.ts';
+import { usableBottomDiameterMm, wrapStripLengthMm } from '../vessels/vessel.ts';
+
+/** Paper past the end of a wrap strip, to tape over its start (common practice, no source). */
+export const OVERLAP_TAB_MM = 15;
+
+export interface PlacedPart {
+  pieces: Piece[];
+  holes: Hole[];
+  marks: Mark[];
+  /** Side-row positions left out because they fell in a keep-out, by row id. */
+  dropped: Map<string, number>;
+}
+
+/** Unrolls one part into its pieces (a wall strip, end discs) and places every hole on them. */
+export function buildPart(part: Part, design: Design, drills: DrillLookup): PlacedPart {
+  const out: PlacedPart = { pieces: [], holes: [], marks: [], dropped: new Map() };
+  const vessel = part.vessel;
+  const name = part.name ?? part.role;
+
+  if (part.sideRows.length > 0) {
+    const strip: WrapStripPiece = {
+      kind: 'wrap-strip',
+      id: `${part.id}:wall`,
+      partId: part.id,
+      role: part.role,
+      name: `${name}, wall`,
+      lengthMm: wrapStripLengthMm(vessel, design.paperThicknessMm),
+      heightMm: vessel.heightMm,
+      vesselDiameterMm: vessel.outerDiameterMm,
+      overlapTabMm: OVERLAP_TAB_MM,
+      seamAngleDeg: vessel.seamAngleDeg,
+    };
+    out.pieces.push(strip);
+    out.marks.push({ kind: 'seam-line', pieceId: strip.id, xMm: 0 });
+    for (const row of part.sideRows) {
+      const drill = resolveDrill(drills, row.drillId);
+      const yMm = row.height.from === 'bottom' ? row.height.mm : vessel.heightMm - row.height.mm;
+      const { positions, dropped } = placeSideRow(row, drill.diameterMm, vessel.outerDiameterMm);
+      if (dropped.length) out.dropped.set(row.id, dropped.length);
+      out.marks.push({ kind: 'row-line', pieceId: strip.id, sourceId: row.id, yMm });
+      for (const position of positions) {
+        out.holes.push({
+          id: `${strip.id}/${row.id}/${position.index}`,
+          pieceId: strip.id,
+          group: row.group,
+          sourceId: row.id,
+          index: position.index,
+          // The strip starts at the seam: x grows with the angle counter-clockwise from it.
+          xMm: (normalizeDeg(position.angleDeg - vessel.seamAngleDeg) / 360) * strip.lengthMm,
+          yMm,
+          diameterMm: drill.diameterMm,
+          drillId: drill.id,
+          drillLabel: drill.label,
+          angleDeg: position.angleDeg,
+        });
+      }
+    }
+  }
+
+  for (const face of ['bottom', 'lid'] as const) {
+    const patterns = part.endPatterns.filter((pattern) => pattern.face === face);
+    if (patterns.length === 0) continue;
+    const disc: DiscPiece = {
+      kind: 'disc',
+      id: `${part.id}:${face}`,
+      partId: part.id,
+      role: part.role,
+      name: `${name}, ${face}`,
+      face,
+      diameterMm: usableBottomDiameterMm(vessel),
+      vesselDiameterMm: vessel.outerDiameterMm,
+      indexAngleDeg: vessel.seamAngleDeg,
+    };
+    out.pieces.push(disc);
+    out.marks.push({ kind: 'centre-cross', pieceId: disc.id }, { kind: 'index-mark', pieceId: disc.id, angleDeg: 0 });
+    for (const pattern of patterns) {
+      const drill = resolveDrill(drills, pattern.drillId);
+      const { rings, positions } = placeEndPattern(pattern);
+      for (const ring of rings) out.marks.push({ kind: 'ring-circle', pieceId: disc.id, sourceId: pattern.id, radiusMm: ring.radiusMm });
+      for (const position of positions) {
+        // Angles run counter-clockwise from the index mark, which is drawn straight up (+y).
+        const theta = ((position.angleDeg + 90) * Math.PI) / 180;
+        out.holes.push({
+          id: `${disc.id}/${pattern.id}/${position.index}`,
+          pieceId: disc.id,
+          group: pattern.group,
+          sourceId: pattern.id,
+          index: position.index,
+          xMm: position.radiusMm * Math.cos(theta),
+          yMm: position.radiusMm * Math.sin(theta),
+          diameterMm: drill.diameterMm,
+          drillId: drill.id,
+          drillLabel: drill.label,
+          angleDeg: position.angleDeg,
+          radiusMm: position.radiusMm,
+        });
+      }
+    }
+  }
+  return out;
+}

@@ -1,0 +1,32 @@
+import type { Design } from '../../design/design-schema.ts';
+import type { Finding, Hole, Piece } from '../layout-types.ts';
+
+export interface CheckContext {
+  design: Design;
+  pieces: Piece[];
+  holesByPiece: Map<string, Hole[]>;
+  /** Side-row positions dropped in keep-outs, by "partId/rowId". */
+  dropped: Map<string, number>;
+}
+
+export type Check = (context: CheckContext) => Finding[];
+
+/** Collects findings of one rule per key, so 40 tight holes make one finding, not 40. */
+export class FindingGroups {
+  private groups = new Map<string, Finding>();
+
+  add(key: string, make: () => Omit<Finding, 'holeIds'>, holeIds: string[], merge?: (finding: Finding) => void): void {
+    let finding = this.groups.get(key);
+    if (!finding) {
+      finding = { ...make(), holeIds: [] };
+      this.groups.set(key, finding);
+    } else merge?.(finding);
+    for (const id of holeIds) if (!finding.holeIds.includes(id)) finding.holeIds.push(id);
+  }
+
+  list(): Finding[] {
+    return [...this.groups.values()];
+  }
+}
+
+export const mm = (value: number) => Math.round(value * 100) / 100;

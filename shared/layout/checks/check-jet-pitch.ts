@@ -1,0 +1,43 @@
+import type { Hole } from '../layout-types.ts';
+import { normalizeDeg } from '../angles.ts';
+import { mm, type Check } from './check-context.ts';
+
+/**
+ * Secondary jets must sit close enough for their flames to join into one ring: warn above the
+ * design's warning pitch, error above its error pitch (defaults 5/8 in and 3/4 in: common
+ * practice, no source). A keep-out gap counts as a pitch too: the ring breaks there.
+ */
+export const checkJetPitch: Check = ({ design, pieces, holesByPiece }) => {
+  const { jetPitchWarnMm, jetPitchErrorMm } = design.rules;
+  const findings = [];
+  for (const piece of pieces) {
+    if (piece.kind !== 'wrap-strip') continue;
+    const rows = new Map<string, Hole[]>();
+    for (const hole of holesByPiece.get(piece.id) ?? []) {
+      if (hole.group !== 'secondary') continue;
+      rows.set(hole.sourceId, [...(rows.get(hole.sourceId) ?? []), hole]);
+    }
+    for (const [rowId, holes] of rows) {
+      if (holes.length < 2) continue;
+      const sorted = [...holes].sort((a, b) => a.angleDeg - b.angleDeg);
+      let widest = { gapDeg: -1, from: sorted[0]!, to: sorted[0]! };
+      sorted.forEach((hole, i) => {
+        const next = sorted[(i + 1) % sorted.length]!;
+        const gapDeg = i + 1 < sorted.length ? next.angleDeg - hole.angleDeg : normalizeDeg(next.angleDeg - hole.angleDeg) || 360;
+        if (gapDeg > widest.gapDeg) widest = { gapDeg, from: hole, to: next };
+      });
+      const pitchMm = (widest.gapDeg / 360) * Math.PI * piece.vesselDiameterMm;
+      if (pitchMm <= jetPitchWarnMm + 1e-9) continue;
+      const error = pitchMm > jetPitchErrorMm + 1e-9;
+      findings.push({
+        rule: 'jet-pitch',
+        severity: error ? ('error' as const) : ('warning' as const),
+        pieceId: piece.id,
+        message: `Jets of "${rowId}" are up to ${mm(pitchMm)} mm apart (limit ${mm(error ? jetPitchErrorMm : jetPitchWarnMm)} mm): their flames will not join into one ring. Add holes or close the gap.`,
+        numbers: { pitchMm: mm(pitchMm), warnMm: jetPitchWarnMm, errorMm: jetPitchErrorMm },
+        holeIds: [widest.from.id, widest.to.id],
+      });
+    }
+  }
+  return findings;
+};

@@ -1,0 +1,58 @@
+import type { Hole } from '../layout-types.ts';
+import { FindingGroups, mm, type Check } from './check-context.ts';
+
+/**
+ * Holes that overlap (error) and ligaments, the metal left between hole edges, thinner than the
+ * design's minimum (warning: thin webs tear or crack when drilled and heated). Sweep and prune
+ * along x keeps this near-linear; on a wrap strip x wraps round at the strip length.
+ */
+export const checkSpacing: Check = ({ design, pieces, holesByPiece }) => {
+  const minLigament = design.rules.minLigamentMm;
+  const found = new FindingGroups();
+  for (const piece of pieces) {
+    const holes = [...(holesByPiece.get(piece.id) ?? [])].sort((a, b) => a.xMm - b.xMm);
+    const period = piece.kind === 'wrap-strip' ? piece.lengthMm : Infinity;
+    const reach = Math.max(0, ...holes.map((h) => h.diameterMm)) + minLigament;
+    const report = (a: Hole, b: Hole, ligament: number) => {
+      const overlap = ligament < 0;
+      const [first, second] = a.sourceId <= b.sourceId ? [a, b] : [b, a];
+      found.add(
+        `${overlap ? 'o' : 'l'}|${piece.id}|${first.sourceId}|${second.sourceId}`,
+        () => ({
+          rule: overlap ? 'holes-overlap' : 'thin-ligament',
+          severity: overlap ? 'error' : 'warning',
+          pieceId: piece.id,
+          message: overlap
+            ? `Holes of ${describe(first, second)} overlap on ${piece.name}: they would merge into one ragged hole.`
+            : `Only ${mm(ligament)} mm of metal between holes of ${describe(first, second)} on ${piece.name} (minimum ${minLigament} mm): thin webs tear when drilled and crack when hot.`,
+          numbers: { ligamentMm: mm(ligament), minimumMm: minLigament },
+        }),
+        [a.id, b.id],
+        (finding) => {
+          if (ligament < finding.numbers.ligamentMm!) finding.numbers.ligamentMm = mm(ligament);
+        },
+      );
+    };
+    for (let i = 0; i < holes.length; i++) {
+      const a = holes[i]!;
+      for (let j = i + 1; j < holes.length && holes[j]!.xMm - a.xMm < reach; j++) compare(a, holes[j]!, period, minLigament, report);
+      if (period !== Infinity) {
+        // Near the end of the strip, neighbours sit at its start.
+        for (let j = 0; j < i && holes[j]!.xMm + period - a.xMm < reach; j++) compare(a, holes[j]!, period, minLigament, report);
+      }
+    }
+  }
+  return found.list();
+};
+
+function compare(a: Hole, b: Hole, period: number, minLigament: number, report: (a: Hole, b: Hole, ligament: number) => void): void {
+  let dx = Math.abs(a.xMm - b.xMm);
+  if (period !== Infinity) dx = Math.min(dx, period - dx);
+  const ligament = Math.hypot(dx, a.yMm - b.yMm) - (a.diameterMm + b.diameterMm) / 2;
+  if (ligament < minLigament - 1e-9) report(a, b, ligament);
+}
+
+function describe(a: Hole, b: Hole): string {
+  return a.sourceId === b.sourceId ? `"${a.sourceId}"` : `"${a.sourceId}" and "${b.sourceId}"`;
+}
+

@@ -1,0 +1,102 @@
+import type { HoleGroup, PartRole } from '../design/design-schema.ts';
+
+/**
+ * The result of laying out a design: plain data in millimetres. The preview, the PDF and the
+ * SVG all draw this same value, so what the maker sees is what prints.
+ */
+
+/** The wall of a vessel unrolled: x along the strip from the seam, y up from the bottom edge. */
+export interface WrapStripPiece {
+  kind: 'wrap-strip';
+  id: string;
+  partId: string;
+  role: PartRole;
+  name: string;
+  /** pi x (D + paper thickness): the paper's centre line round the can. */
+  lengthMm: number;
+  heightMm: number;
+  vesselDiameterMm: number;
+  /** Extra paper past the end, to tape over the start. */
+  overlapTabMm: number;
+  seamAngleDeg: number;
+}
+
+/** A can end (bottom or lid): x, y from its centre, y towards the index mark's side. */
+export interface DiscPiece {
+  kind: 'disc';
+  id: string;
+  partId: string;
+  role: PartRole;
+  name: string;
+  face: 'bottom' | 'lid';
+  /** The paper disc is cut to the usable flat end, inside the rim. */
+  diameterMm: number;
+  vesselDiameterMm: number;
+  /** The index mark sits at this angle; it lines up with the seam on the wall. */
+  indexAngleDeg: number;
+}
+
+export type Piece = WrapStripPiece | DiscPiece;
+
+export interface Hole {
+  id: string;
+  pieceId: string;
+  group: HoleGroup;
+  /** The side row or end pattern the hole belongs to. */
+  sourceId: string;
+  index: number;
+  xMm: number;
+  yMm: number;
+  diameterMm: number;
+  drillId: string;
+  drillLabel: string;
+  /** Around the wall (strips) or from the index mark (discs), degrees. */
+  angleDeg: number;
+  /** Discs only: distance from the centre. */
+  radiusMm?: number;
+}
+
+/** Construction and reference marks the templates draw. */
+export type Mark =
+  | { kind: 'seam-line'; pieceId: string; xMm: number }
+  | { kind: 'row-line'; pieceId: string; sourceId: string; yMm: number }
+  | { kind: 'ring-circle'; pieceId: string; sourceId: string; radiusMm: number }
+  | { kind: 'centre-cross'; pieceId: string }
+  | { kind: 'index-mark'; pieceId: string; angleDeg: number };
+
+export type Severity = 'error' | 'warning' | 'note';
+
+export interface Finding {
+  rule: string;
+  severity: Severity;
+  /** One line: what is wrong and why it matters. */
+  message: string;
+  numbers: Record<string, number>;
+  holeIds: string[];
+  pieceId?: string;
+}
+
+export interface GroupTotal {
+  group: HoleGroup;
+  holeCount: number;
+  openAreaMm2: number;
+  sizes: { drillId: string; drillLabel: string; diameterMm: number; count: number }[];
+}
+
+export interface AirflowSummary {
+  primaryAreaMm2: number;
+  secondaryAreaMm2: number;
+  /** primary / secondary, or null without secondary holes. */
+  ratio: number | null;
+  targetRatio: number;
+}
+
+export interface Layout {
+  designName: string;
+  pieces: Piece[];
+  holes: Hole[];
+  marks: Mark[];
+  groups: GroupTotal[];
+  airflow: AirflowSummary;
+  findings: Finding[];
+}
