@@ -145,4 +145,5 @@ function passesChecks(base: Design, partId: string, split: PrimarySplit): boolea
   return !trial.findings.some((f) => f.severity !== 'note' && f.rule !== 'airflow-ratio' && f.rule !== 'drill-not-in-set' && f.holeIds.some(own));
 }
 
-const round = (value: number) => Math.round(value * 100) / 100;
+/** Radii are written to 0.01 mm, rounded inwards so the outer ring keeps its rim margin. */
+const round = (value: number) => Math.floor(value * 100) / 100;

@@ -82,7 +82,7 @@ export const endPatternSchema = z.object({
   drillId,
   centerHole: z.boolean().default(false),
   rings: ringPlanSchema,
-  /** Turn every other ring by half its own pitch, so holes do not line up radially. */
+  /** Turn each ring by half its own pitch against the ring inside it, so holes do not line up radially. */
   stagger: z.boolean().default(false),
   /** Phase of the first ring, degrees from the index mark. */
   phaseDeg: angleDeg.default(0),
@@ -104,12 +104,17 @@ export const partSchema = z.object({
 });
 export type Part = z.infer<typeof partSchema>;
 
-/** Limits the checks use; defaults are rules of thumb (see shared/layout/checks). */
+/**
+ * Limits the checks use; every default is a rule of thumb (common practice, no source): 3 mm of
+ * metal between holes, jets at most 5/8 in apart (warning) and 3/4 in (error), hole edges 3 mm
+ * clear of the welded side seam, 6 mm below the top rim and above the bottom chime, 3 mm inside
+ * the rim of a can end.
+ */
 export const rulesSchema = z.object({
   minLigamentMm: z.number().min(0).max(50).default(3),
   jetPitchWarnMm: z.number().positive().max(200).default(15.875),
   jetPitchErrorMm: z.number().positive().max(200).default(19.05),
-  seamMarginMm: z.number().min(0).max(50).default(6),
+  seamMarginMm: z.number().min(0).max(50).default(3),
   topMarginMm: z.number().min(0).max(50).default(6),
   chimeMarginMm: z.number().min(0).max(50).default(6),
   rimMarginMm: z.number().min(0).max(50).default(3),

@@ -1,8 +1,11 @@
 /** Angle helpers, in degrees. */
 
+/** An angle in [0, 360). A tiny negative angle wraps to 360 in floating point, so that becomes 0. */
 export function normalizeDeg(deg: number): number {
   const r = deg % 360;
-  return r < 0 ? r + 360 : r;
+  if (r >= 0) return r;
+  const wrapped = r + 360;
+  return wrapped >= 360 ? 0 : wrapped;
 }
 
 /** Length of the arc from start counter-clockwise to end, 0 to 360. */

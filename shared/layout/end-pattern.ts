@@ -33,10 +33,14 @@ export interface EndPosition {
 
 /** Every hole of an end pattern; ring -1 is the centre hole. */
 export function placeEndPattern(pattern: EndPattern): { rings: Ring[]; positions: EndPosition[] } {
-  const rings = planRings(pattern.rings).map((ring, i) => ({
-    ...ring,
-    phaseDeg: normalizeDeg(pattern.phaseDeg + ring.phaseDeg + (pattern.stagger && i % 2 === 1 ? 180 / ring.count : 0)),
-  }));
+  // Stagger turns each ring by half its own pitch more than the ring inside it. With equal
+  // counts that alternates (0, half, 0...); with doubling counts (4, 8, 16) no hole lines up
+  // radially with a hole of the next ring.
+  let turn = 0;
+  const rings = planRings(pattern.rings).map((ring, i) => {
+    if (pattern.stagger && i > 0) turn += 180 / ring.count;
+    return { ...ring, phaseDeg: normalizeDeg(pattern.phaseDeg + ring.phaseDeg + turn) };
+  });
   const positions: EndPosition[] = [];
   if (pattern.centerHole) positions.push({ index: 0, ring: -1, radiusMm: 0, angleDeg: 0 });
   rings.forEach((ring, r) => {

@@ -13,19 +13,19 @@ export type Check = (context: CheckContext) => Finding[];
 
 /** Collects findings of one rule per key, so 40 tight holes make one finding, not 40. */
 export class FindingGroups {
-  private groups = new Map<string, Finding>();
+  private groups = new Map<string, { finding: Finding; holeIds: Set<string> }>();
 
   add(key: string, make: () => Omit<Finding, 'holeIds'>, holeIds: string[], merge?: (finding: Finding) => void): void {
-    let finding = this.groups.get(key);
-    if (!finding) {
-      finding = { ...make(), holeIds: [] };
-      this.groups.set(key, finding);
-    } else merge?.(finding);
-    for (const id of holeIds) if (!finding.holeIds.includes(id)) finding.holeIds.push(id);
+    let group = this.groups.get(key);
+    if (!group) {
+      group = { finding: { ...make(), holeIds: [] }, holeIds: new Set() };
+      this.groups.set(key, group);
+    } else merge?.(group.finding);
+    for (const id of holeIds) group.holeIds.add(id);
   }
 
   list(): Finding[] {
-    return [...this.groups.values()];
+    return [...this.groups.values()].map(({ finding, holeIds }) => ({ ...finding, holeIds: [...holeIds] }));
   }
 }
 

@@ -6,6 +6,9 @@ import { FindingGroups, mm, type Check } from './check-context.ts';
  * Holes off the part (error) or too close to its edges (warning): the top edge and the bottom
  * chime of a wall, the side seam, the rim of a can end. Margins are the design's rules.
  */
+/** A margin met to within a micrometre is met: geometry built exactly on a limit must pass it. */
+const EPSILON_MM = 1e-6;
+
 export const checkEdges: Check = ({ design, pieces, holesByPiece }) => {
   const rules = design.rules;
   const found = new FindingGroups();
@@ -25,16 +28,19 @@ export const checkEdges: Check = ({ design, pieces, holesByPiece }) => {
           flag(hole, 'leaves-part', 'error', piece.id, `Holes of ${where} run past the ${below < 0 ? 'bottom' : 'top'} of the can.`, { overhangMm: mm(-Math.min(below, above)) });
           continue;
         }
-        if (above < rules.topMarginMm) flag(hole, 'near-top-edge', 'warning', piece.id, `Holes of ${where} are ${mm(above)} mm from the top edge (keep ${rules.topMarginMm} mm): the rim bends and the metal tears there.`, { clearanceMm: mm(above), minimumMm: rules.topMarginMm });
-        if (below < rules.chimeMarginMm) flag(hole, 'near-bottom-chime', 'warning', piece.id, `Holes of ${where} are ${mm(below)} mm from the bottom edge (keep ${rules.chimeMarginMm} mm): the chime seam is thick and the bit wanders.`, { clearanceMm: mm(below), minimumMm: rules.chimeMarginMm });
+        if (above < rules.topMarginMm - EPSILON_MM) flag(hole, 'near-top-edge', 'warning', piece.id, `Holes of ${where} are ${mm(above)} mm from the top edge (keep ${rules.topMarginMm} mm): the rim bends and the metal tears there.`, { clearanceMm: mm(above), minimumMm: rules.topMarginMm });
+        if (below < rules.chimeMarginMm - EPSILON_MM) flag(hole, 'near-bottom-chime', 'warning', piece.id, `Holes of ${where} are ${mm(below)} mm from the bottom edge (keep ${rules.chimeMarginMm} mm): the chime seam is thick and the bit wanders.`, { clearanceMm: mm(below), minimumMm: rules.chimeMarginMm });
         const seamMm = (angularDistanceDeg(hole.angleDeg, piece.seamAngleDeg) / 360) * Math.PI * piece.vesselDiameterMm - r;
-        if (seamMm < rules.seamMarginMm) flag(hole, 'near-seam', 'warning', piece.id, `Holes of ${where} are ${mm(seamMm)} mm from the side seam (keep ${rules.seamMarginMm} mm): the seam is doubled metal and may split.`, { clearanceMm: mm(seamMm), minimumMm: rules.seamMarginMm });
+        if (seamMm < rules.seamMarginMm - EPSILON_MM) {
+          const text = seamMm < 0 ? `Holes of ${where} cut into the side seam` : `Holes of ${where} are ${mm(seamMm)} mm from the side seam (keep ${rules.seamMarginMm} mm)`;
+          flag(hole, 'near-seam', 'warning', piece.id, `${text}: the seam is doubled metal and may split.`, { clearanceMm: mm(seamMm), minimumMm: rules.seamMarginMm });
+        }
       } else {
         const usable = piece.diameterMm / 2;
         const outer = Math.hypot(hole.xMm, hole.yMm) + r;
-        if (outer > usable + 1e-9) {
+        if (outer > usable + EPSILON_MM) {
           flag(hole, 'outside-usable-bottom', 'error', piece.id, `Holes of ${where} reach ${mm(outer - usable)} mm past the flat of the can end, into the rim.`, { overhangMm: mm(outer - usable), usableRadiusMm: mm(usable) });
-        } else if (usable - outer < rules.rimMarginMm) {
+        } else if (usable - outer < rules.rimMarginMm - EPSILON_MM) {
           flag(hole, 'near-rim', 'warning', piece.id, `Holes of ${where} are ${mm(usable - outer)} mm from the rim (keep ${rules.rimMarginMm} mm).`, { clearanceMm: mm(usable - outer), minimumMm: rules.rimMarginMm });
         }
       }

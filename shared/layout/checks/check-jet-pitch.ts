@@ -7,6 +7,9 @@ import { mm, type Check } from './check-context.ts';
  * design's warning pitch, error above its error pitch (defaults 5/8 in and 3/4 in: common
  * practice, no source). A keep-out gap counts as a pitch too: the ring breaks there.
  */
+/** Marks on a taped paper strip are good to about 0.1 mm; a limit in inch fractions is no finer. */
+const MARK_TOLERANCE_MM = 0.1;
+
 export const checkJetPitch: Check = ({ design, pieces, holesByPiece }) => {
   const { jetPitchWarnMm, jetPitchErrorMm } = design.rules;
   const findings = [];
@@ -27,8 +30,8 @@ export const checkJetPitch: Check = ({ design, pieces, holesByPiece }) => {
         if (gapDeg > widest.gapDeg) widest = { gapDeg, from: hole, to: next };
       });
       const pitchMm = (widest.gapDeg / 360) * Math.PI * piece.vesselDiameterMm;
-      if (pitchMm <= jetPitchWarnMm + 1e-9) continue;
-      const error = pitchMm > jetPitchErrorMm + 1e-9;
+      if (pitchMm <= jetPitchWarnMm + MARK_TOLERANCE_MM) continue;
+      const error = pitchMm > jetPitchErrorMm + MARK_TOLERANCE_MM;
       findings.push({
         rule: 'jet-pitch',
         severity: error ? ('error' as const) : ('warning' as const),

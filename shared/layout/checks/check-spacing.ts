@@ -12,6 +12,8 @@ export const checkSpacing: Check = ({ design, pieces, holesByPiece }) => {
   for (const piece of pieces) {
     const holes = [...(holesByPiece.get(piece.id) ?? [])].sort((a, b) => a.xMm - b.xMm);
     const period = piece.kind === 'wrap-strip' ? piece.lengthMm : Infinity;
+    // The strip is a touch longer than the can's circumference (paper thickness); metal is measured on the can.
+    const toMetal = piece.kind === 'wrap-strip' ? (Math.PI * piece.vesselDiameterMm) / piece.lengthMm : 1;
     const reach = Math.max(0, ...holes.map((h) => h.diameterMm)) + minLigament;
     const report = (a: Hole, b: Hole, ligament: number) => {
       const overlap = ligament < 0;
@@ -35,21 +37,21 @@ export const checkSpacing: Check = ({ design, pieces, holesByPiece }) => {
     };
     for (let i = 0; i < holes.length; i++) {
       const a = holes[i]!;
-      for (let j = i + 1; j < holes.length && holes[j]!.xMm - a.xMm < reach; j++) compare(a, holes[j]!, period, minLigament, report);
+      for (let j = i + 1; j < holes.length && holes[j]!.xMm - a.xMm < reach; j++) compare(a, holes[j]!, period, toMetal, minLigament, report);
       if (period !== Infinity) {
         // Near the end of the strip, neighbours sit at its start.
-        for (let j = 0; j < i && holes[j]!.xMm + period - a.xMm < reach; j++) compare(a, holes[j]!, period, minLigament, report);
+        for (let j = 0; j < i && holes[j]!.xMm + period - a.xMm < reach; j++) compare(a, holes[j]!, period, toMetal, minLigament, report);
       }
     }
   }
   return found.list();
 };
 
-function compare(a: Hole, b: Hole, period: number, minLigament: number, report: (a: Hole, b: Hole, ligament: number) => void): void {
+function compare(a: Hole, b: Hole, period: number, toMetal: number, minLigament: number, report: (a: Hole, b: Hole, ligament: number) => void): void {
   let dx = Math.abs(a.xMm - b.xMm);
-  if (period !== Infinity) dx = Math.min(dx, period - dx);
+  if (period !== Infinity) dx = Math.min(dx, period - dx) * toMetal;
   const ligament = Math.hypot(dx, a.yMm - b.yMm) - (a.diameterMm + b.diameterMm) / 2;
-  if (ligament < minLigament - 1e-9) report(a, b, ligament);
+  if (ligament < minLigament - 1e-6) report(a, b, ligament);
 }
 
 function describe(a: Hole, b: Hole): string {

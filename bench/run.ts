@@ -1,0 +1,5 @@
+import { benchLayout } from './layout-bench.ts';
+
+/** npm run bench: speed and size figures (machine-dependent; compare runs on one machine). */
+console.log(`Canwright benchmarks on Node ${process.version}`);
+benchLayout();
