@@ -24,7 +24,7 @@ export const checkEdges: Check = ({ design, pieces, holesByPiece }) => {
       if (piece.kind === 'wrap-strip') {
         const below = hole.yMm - r;
         const above = piece.heightMm - (hole.yMm + r);
-        if (below < 0 || above < 0) {
+        if (below < -EPSILON_MM || above < -EPSILON_MM) {
           flag(hole, 'leaves-part', 'error', piece.id, `Holes of ${where} run past the ${below < 0 ? 'bottom' : 'top'} of the can.`, { overhangMm: mm(-Math.min(below, above)) });
           continue;
         }
