@@ -6,6 +6,10 @@ import { findDrill } from '../../../shared/drills/index.ts';
 import { layoutDesign } from '../../../shared/layout/index.ts';
 
 // Property tests (fast-check) over generated designs whose holes are asked to fit their part.
+// On CI the seed is fixed so a run can be repeated; locally each run explores new designs
+// (set FC_SEED to replay one).
+const seed = process.env.FC_SEED ? Number(process.env.FC_SEED) : process.env.CI === 'true' ? 20261201 : undefined;
+if (seed !== undefined) fc.configureGlobal({ seed });
 const drillIds = ['frac:1/8', 'frac:5/32', 'frac:3/16', 'frac:1/4', 'frac:5/16', 'mm:4', 'mm:6', 'num:30', 'let:F'];
 
 const designArbitrary = fc
