@@ -9,6 +9,47 @@ import { usableBottomDiameterMm, wrapStripLengthMm } from '../vessels/vessel.ts'
 /** Paper past the end of a wrap strip, to tape over its start (common practice, no source). */
 export const OVERLAP_TAB_MM = 15;
 
+/**
+ * A wall strip taller than this is cut into a band at the rim (rows measured from the top) and a
+ * band at the bottom, each only as tall as its rows need: a No. 10 can's full wall (178 mm) does
+ * not fit a Letter sheet with its rulers, and a short band is easier to tape on straight.
+ * Common practice, no source.
+ */
+export const FULL_STRIP_MAX_MM = 150;
+/** Paper kept beyond a band's outermost hole edge, for its crosshairs and label. */
+export const BAND_MARGIN_MM = 12;
+
+interface WallBand {
+  fromYMm: number;
+  toYMm: number;
+  reference: 'bottom' | 'top';
+  rows: Part['sideRows'];
+}
+
+const rowHeight = (row: Part['sideRows'][number], vesselHeightMm: number) => (row.height.from === 'bottom' ? row.height.mm : vesselHeightMm - row.height.mm);
+
+/** One full-height strip, or a top band and a bottom band on a tall can whose rows leave a gap. */
+function planWallBands(part: Part, drills: DrillLookup): WallBand[] {
+  const H = part.vessel.heightMm;
+  const whole: WallBand[] = [{ fromYMm: 0, toYMm: H, reference: 'bottom', rows: part.sideRows }];
+  if (H <= FULL_STRIP_MAX_MM) return whole;
+  const extent = (rows: Part['sideRows']) =>
+    rows.map((row) => {
+      const y = rowHeight(row, H);
+      const r = resolveDrill(drills, row.drillId).diameterMm / 2;
+      return [y - r, y + r] as const;
+    });
+  const top = part.sideRows.filter((row) => row.height.from === 'top');
+  const bottom = part.sideRows.filter((row) => row.height.from === 'bottom');
+  const bottomTo = bottom.length ? Math.min(H, Math.max(...extent(bottom).map(([, hi]) => hi)) + BAND_MARGIN_MM) : 0;
+  const topFrom = top.length ? Math.max(0, Math.min(...extent(top).map(([lo]) => lo)) - BAND_MARGIN_MM) : H;
+  if (bottomTo >= topFrom) return whole;
+  const bands: WallBand[] = [];
+  if (top.length) bands.push({ fromYMm: topFrom, toYMm: H, reference: 'top', rows: top });
+  if (bottom.length) bands.push({ fromYMm: 0, toYMm: bottomTo, reference: 'bottom', rows: bottom });
+  return bands;
+}
+
 export interface PlacedPart {
   pieces: Piece[];
   holes: Hole[];
@@ -24,41 +65,48 @@ export function buildPart(part: Part, design: Design, drills: DrillLookup): Plac
   const name = part.name ?? part.role;
 
   if (part.sideRows.length > 0) {
-    const strip: WrapStripPiece = {
-      kind: 'wrap-strip',
-      id: `${part.id}:wall`,
-      partId: part.id,
-      role: part.role,
-      name: `${name}, wall`,
-      lengthMm: wrapStripLengthMm(vessel, design.paperThicknessMm),
-      heightMm: vessel.heightMm,
-      vesselDiameterMm: vessel.outerDiameterMm,
-      overlapTabMm: OVERLAP_TAB_MM,
-      seamAngleDeg: vessel.seamAngleDeg,
-    };
-    out.pieces.push(strip);
-    out.marks.push({ kind: 'seam-line', pieceId: strip.id, xMm: 0 });
-    for (const row of part.sideRows) {
-      const drill = resolveDrill(drills, row.drillId);
-      const yMm = row.height.from === 'bottom' ? row.height.mm : vessel.heightMm - row.height.mm;
-      const { positions, dropped } = placeSideRow(row, drill.diameterMm, vessel.outerDiameterMm);
-      if (dropped.length) out.dropped.set(row.id, dropped.length);
-      out.marks.push({ kind: 'row-line', pieceId: strip.id, sourceId: row.id, yMm });
-      for (const position of positions) {
-        out.holes.push({
-          id: `${strip.id}/${row.id}/${position.index}`,
-          pieceId: strip.id,
-          group: row.group,
-          sourceId: row.id,
-          index: position.index,
-          // The strip starts at the seam: x grows with the angle counter-clockwise from it.
-          xMm: (normalizeDeg(position.angleDeg - vessel.seamAngleDeg) / 360) * strip.lengthMm,
-          yMm,
-          diameterMm: drill.diameterMm,
-          drillId: drill.id,
-          drillLabel: drill.label,
-          angleDeg: position.angleDeg,
-        });
+    const bands = planWallBands(part, drills);
+    for (const band of bands) {
+      const strip: WrapStripPiece = {
+        kind: 'wrap-strip',
+        id: bands.length === 1 ? `${part.id}:wall` : `${part.id}:wall-${band.reference}`,
+        partId: part.id,
+        role: part.role,
+        name: bands.length === 1 ? `${name}, wall` : `${name}, wall (${band.reference === 'top' ? 'top band' : 'bottom band'})`,
+        lengthMm: wrapStripLengthMm(vessel, design.paperThicknessMm),
+        heightMm: band.toYMm - band.fromYMm,
+        fromYMm: band.fromYMm,
+        toYMm: band.toYMm,
+        reference: band.reference,
+        vesselHeightMm: vessel.heightMm,
+        vesselDiameterMm: vessel.outerDiameterMm,
+        overlapTabMm: OVERLAP_TAB_MM,
+        seamAngleDeg: vessel.seamAngleDeg,
+      };
+      out.pieces.push(strip);
+      out.marks.push({ kind: 'seam-line', pieceId: strip.id, xMm: 0 });
+      for (const row of band.rows) {
+        const drill = resolveDrill(drills, row.drillId);
+        const yMm = rowHeight(row, vessel.heightMm);
+        const { positions, dropped } = placeSideRow(row, drill.diameterMm, vessel.outerDiameterMm);
+        if (dropped.length) out.dropped.set(row.id, dropped.length);
+        out.marks.push({ kind: 'row-line', pieceId: strip.id, sourceId: row.id, yMm });
+        for (const position of positions) {
+          out.holes.push({
+            id: `${strip.id}/${row.id}/${position.index}`,
+            pieceId: strip.id,
+            group: row.group,
+            sourceId: row.id,
+            index: position.index,
+            // The strip starts at the seam: x grows with the angle counter-clockwise from it.
+            xMm: (normalizeDeg(position.angleDeg - vessel.seamAngleDeg) / 360) * strip.lengthMm,
+            yMm,
+            diameterMm: drill.diameterMm,
+            drillId: drill.id,
+            drillLabel: drill.label,
+            angleDeg: position.angleDeg,
+          });
+        }
       }
     }
   }

@@ -5,7 +5,11 @@ import type { HoleGroup, PartRole } from '../design/design-schema.ts';
  * SVG all draw this same value, so what the maker sees is what prints.
  */
 
-/** The wall of a vessel unrolled: x along the strip from the seam, y up from the bottom edge. */
+/**
+ * The wall of a vessel unrolled: x along the strip from the seam. Hole y is measured up from the
+ * can's bottom; a strip covers the band fromYMm..toYMm of the wall and lines up with one edge of
+ * the can (its bottom, or its top rim for a band of jets on a tall can).
+ */
 export interface WrapStripPiece {
   kind: 'wrap-strip';
   id: string;
@@ -14,7 +18,13 @@ export interface WrapStripPiece {
   name: string;
   /** pi x (D + paper thickness): the paper's centre line round the can. */
   lengthMm: number;
+  /** toYMm - fromYMm. */
   heightMm: number;
+  fromYMm: number;
+  toYMm: number;
+  /** The can edge this strip's edge is set level with. */
+  reference: 'bottom' | 'top';
+  vesselHeightMm: number;
   vesselDiameterMm: number;
   /** Extra paper past the end, to tape over the start. */
   overlapTabMm: number;

@@ -23,7 +23,7 @@ export const checkEdges: Check = ({ design, pieces, holesByPiece }) => {
       const where = `"${hole.sourceId}" on ${piece.name}`;
       if (piece.kind === 'wrap-strip') {
         const below = hole.yMm - r;
-        const above = piece.heightMm - (hole.yMm + r);
+        const above = piece.vesselHeightMm - (hole.yMm + r);
         if (below < -EPSILON_MM || above < -EPSILON_MM) {
           flag(hole, 'leaves-part', 'error', piece.id, `Holes of ${where} run past the ${below < 0 ? 'bottom' : 'top'} of the can.`, { overhangMm: mm(-Math.min(below, above)) });
           continue;

@@ -65,8 +65,9 @@ describe('layout properties (fast-check)', () => {
           if (piece.kind === 'wrap-strip') {
             expect(hole.xMm).toBeGreaterThanOrEqual(0);
             expect(hole.xMm).toBeLessThan(piece.lengthMm);
-            expect(hole.yMm - r).toBeGreaterThanOrEqual(-1e-9);
-            expect(hole.yMm + r).toBeLessThanOrEqual(piece.heightMm + 1e-9);
+            expect(hole.yMm - r).toBeGreaterThanOrEqual(piece.fromYMm - 1e-9);
+            expect(hole.yMm + r).toBeLessThanOrEqual(piece.toYMm + 1e-9);
+            expect(piece.toYMm - piece.fromYMm).toBeCloseTo(piece.heightMm, 9);
           } else {
             expect(Math.hypot(hole.xMm, hole.yMm) + r).toBeLessThanOrEqual(piece.diameterMm / 2 + 1e-9);
           }

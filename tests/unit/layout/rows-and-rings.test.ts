@@ -61,3 +61,27 @@ describe('end rings', () => {
     for (const a of r20) expect(r10.has(a) || r30.has(a)).toBe(false);
   });
 });
+
+describe('wall bands on tall cans', () => {
+  const jets = { id: 'jets', group: 'secondary' as const, drillId: 'frac:3/16', count: 24, height: { from: 'top' as const, mm: 20 }, startDeg: 7.5 };
+  const low = { id: 'low', group: 'primary' as const, drillId: 'frac:1/4', count: 16, height: { from: 'bottom' as const, mm: 16 }, startDeg: 0 };
+
+  it('a No. 10 can wall (177.8 mm, CMI) becomes a rim band and a bottom band, each as tall as its rows need', () => {
+    const layout = layoutDesign(buildDesign({ vessel: vesselFromCatalogue('food-603x700'), sideRows: [jets, low] }));
+    const strips = layout.pieces.filter((p) => p.kind === 'wrap-strip');
+    expect(strips.map((s) => s.id)).toEqual(['chamber:wall-top', 'chamber:wall-bottom']);
+    const [top, bottom] = strips;
+    if (top?.kind !== 'wrap-strip' || bottom?.kind !== 'wrap-strip') throw new Error('strips expected');
+    // Top band: from 12 mm below the lowest jet edge (177.8 - 20 - 2.38) to the rim (worked arithmetic).
+    expect(top).toMatchObject({ reference: 'top', toYMm: 177.8 });
+    expect(top.fromYMm).toBeCloseTo(177.8 - 20 - 4.7625 / 2 - 12, 9);
+    expect(bottom).toMatchObject({ reference: 'bottom', fromYMm: 0 });
+    expect(bottom.toYMm).toBeCloseTo(16 + 6.35 / 2 + 12, 9);
+    expect(layout.holes.filter((h) => h.pieceId === 'chamber:wall-top')).toHaveLength(24);
+  });
+
+  it('a short can keeps one full-height strip with both edges', () => {
+    const layout = layoutDesign(buildDesign({ sideRows: [jets, low] }));
+    expect(layout.pieces.filter((p) => p.kind === 'wrap-strip').map((p) => p.id)).toEqual(['chamber:wall']);
+  });
+});

@@ -1,0 +1,19 @@
+import type { Stroke, TextStyle } from '../drawing/drawing-context.ts';
+
+/** Line weights and type sizes of the printed kit, in mm (0.35 mm is a fine pen line). */
+export const strokes = {
+  cut: { widthMm: 0.35, color: 'ink' },
+  edge: { widthMm: 0.5, color: 'ink' },
+  hole: { widthMm: 0.25, color: 'ink' },
+  cross: { widthMm: 0.15, color: 'ink' },
+  guide: { widthMm: 0.15, color: 'guide', dashMm: [1.5, 1] },
+  tick: { widthMm: 0.15, color: 'ink' },
+  frame: { widthMm: 0.2, color: 'soft' },
+} satisfies Record<string, Stroke>;
+
+export const type = {
+  title: { sizeMm: 3.6, weight: 'bold', color: 'ink' },
+  label: { sizeMm: 2.6, color: 'ink' },
+  small: { sizeMm: 2.1, color: 'soft' },
+  tiny: { sizeMm: 1.7, color: 'soft' },
+} satisfies Record<string, TextStyle>;

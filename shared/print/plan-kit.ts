@@ -1,0 +1,61 @@
+import type { Design } from '../design/design-schema.ts';
+import type { DrawingContext } from '../drawing/drawing-context.ts';
+import { allDrills, commonDrillSets, resolveDrillSet, suggestPilot } from '../drills/index.ts';
+import type { Layout } from '../layout/layout-types.ts';
+import { drawKitSheet } from './draw-kit.ts';
+import type { KitInfo } from './draw-furniture.ts';
+import { imposePieces } from './impose.ts';
+import type { Imposition } from './imposition-types.ts';
+import type { PrintOptions } from './paper.ts';
+import { kitText } from './kit-text.ts';
+
+/** How one printer mis-scales, measured from its calibration sheet: 1.015 = prints 1.5 % long. */
+export interface PrinterScale {
+  scaleX: number;
+  scaleY: number;
+}
+
+export interface KitPlan {
+  imposition: Imposition;
+  info: KitInfo;
+  /** The page transform that pre-compensates the printer (identity without a profile). */
+  transform: { scaleX: number; scaleY: number };
+  drawSheet(index: number, ctx: DrawingContext): void;
+}
+
+/**
+ * Everything a writer needs to print a design's kit: the sheets with their pieces, and a draw
+ * function per sheet. The PDF, the SVG and the on-screen sheet previews all come from here.
+ */
+export function planKit(design: Design, layout: Layout, options: PrintOptions, meta: { version: string; date: string; printer?: PrinterScale }): KitPlan {
+  const imposition = imposePieces(layout.pieces, options);
+  const info: KitInfo = { designName: design.name, version: meta.version, date: meta.date, pilots: pilotsFor(design, layout) };
+  const text = kitText(design.units);
+  return {
+    imposition,
+    info,
+    transform: compensate(meta.printer),
+    drawSheet(index, ctx) {
+      const sheet = imposition.sheets[index];
+      if (!sheet) throw new RangeError(`No sheet ${index + 1} in this kit`);
+      drawKitSheet(ctx, sheet, imposition, layout, info, text);
+    },
+  };
+}
+
+/** A printer that prints `scale` times too long gets drawings `1 / scale` long, so paper measures true. */
+export function compensate(printer?: PrinterScale): { scaleX: number; scaleY: number } {
+  return printer ? { scaleX: 1 / printer.scaleX, scaleY: 1 / printer.scaleY } : { scaleX: 1, scaleY: 1 };
+}
+
+/** A pilot drill for each size that wants one, from the maker's set (or the 29-piece set). */
+function pilotsFor(design: Design, layout: Layout): Map<string, string> {
+  const set = design.drillSet.drillIds.length ? resolveDrillSet(design.drillSet) : resolveDrillSet(commonDrillSets[0] ?? { name: 'all', drillIds: allDrills().map((d) => d.id) });
+  const pilots = new Map<string, string>();
+  for (const hole of layout.holes) {
+    if (pilots.has(hole.drillId)) continue;
+    const pilot = suggestPilot(hole.diameterMm, set);
+    if (pilot) pilots.set(hole.drillId, pilot.label);
+  }
+  return pilots;
+}

@@ -1,0 +1,18 @@
+import { z } from 'zod';
+import { CALIBRATION_X_MM, CALIBRATION_Y_MM } from './draw-calibration.ts';
+import type { PrinterScale } from './plan-kit.ts';
+
+/**
+ * A printer profile: what the maker measured on the calibration sheet. A printer that prints the
+ * 150 mm ruler as 152.25 mm is 1.5 % long in X; kits are then drawn 1/1.015 as long.
+ */
+export const printerProfileInputSchema = z.object({
+  name: z.string().trim().min(1).max(80),
+  measuredXMm: z.number().min(CALIBRATION_X_MM * 0.9).max(CALIBRATION_X_MM * 1.1),
+  measuredYMm: z.number().min(CALIBRATION_Y_MM * 0.9).max(CALIBRATION_Y_MM * 1.1),
+});
+export type PrinterProfileInput = z.infer<typeof printerProfileInputSchema>;
+
+export function printerScale(profile: Pick<PrinterProfileInput, 'measuredXMm' | 'measuredYMm'>): PrinterScale {
+  return { scaleX: profile.measuredXMm / CALIBRATION_X_MM, scaleY: profile.measuredYMm / CALIBRATION_Y_MM };
+}
