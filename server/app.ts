@@ -15,6 +15,7 @@ import { accountRoutes } from './routes/account-routes.ts';
 import { adminRoutes } from './routes/admin-routes.ts';
 import { devMailRoutes } from './routes/dev-mail-routes.ts';
 import { healthRoutes } from './routes/health-routes.ts';
+import { renderRoutes } from './routes/render-routes.ts';
 
 export interface AppDeps {
   database: Database;
@@ -39,6 +40,8 @@ export function createApp(deps: AppDeps): Express {
 
   // better-auth reads its own request bodies, so it is mounted before the JSON parser.
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
+  // Render routes parse their own (smaller) bodies and need no session.
+  app.use('/api/render', renderRoutes());
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRoutes(deps.database, deps.version));
   app.get('/api/app-info', (_req, res) => {

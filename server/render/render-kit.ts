@@ -1,0 +1,90 @@
+import { z } from 'zod';
+import type { Design } from '../../shared/design/index.ts';
+import { validateDesign } from '../../shared/design/index.ts';
+import type { DrawingContext } from '../../shared/drawing/drawing-context.ts';
+import { formatHoleCsv, layoutDesign, type Layout } from '../../shared/layout/index.ts';
+import { drawCalibrationSheet } from '../../shared/print/draw-calibration.ts';
+import { checkImposable, paperSizes, printOptionsSchema, sheetSize, type PrintOptions } from '../../shared/print/index.ts';
+import { planKit, type KitPlan } from '../../shared/print/plan-kit.ts';
+import { printerScale } from '../../shared/print/printer-profile.ts';
+import { AppError } from '../http/app-error.ts';
+import { createPdfDocument } from './pdf/pdf-writer.ts';
+import { createSvgSheet } from './svg/svg-writer.ts';
+
+/** What a render request carries: a design document, paper, and optionally a printer's measurements. */
+export const renderRequestSchema = z.object({
+  design: z.unknown(),
+  print: printOptionsSchema.default(printOptionsSchema.parse({})),
+  printer: z.object({ measuredXMm: z.number(), measuredYMm: z.number() }).optional(),
+  version: z.string().trim().max(40).default('1'),
+});
+export type RenderRequest = z.input<typeof renderRequestSchema>;
+
+interface PreparedKit {
+  design: Design;
+  layout: Layout;
+  plan: KitPlan;
+}
+
+/** Validates the design, lays it out and imposes it; bad input becomes a 400/422 with reasons. */
+export function prepareKit(input: RenderRequest, today = new Date()): PreparedKit {
+  const request = renderRequestSchema.parse(input);
+  const validation = validateDesign(request.design);
+  if (!validation.ok) {
+    throw new AppError(400, 'INVALID_DESIGN', 'The design is not valid.', { fields: validation.problems.map((p) => ({ path: `design.${p.path}`, message: p.message })) });
+  }
+  const layout = layoutDesign(validation.design);
+  const tooMany = layout.findings.find((f) => f.rule === 'too-many-holes');
+  if (tooMany) throw new AppError(422, 'TOO_MANY_HOLES', tooMany.message);
+  const problems = checkImposable(layout.pieces, request.print);
+  if (problems.length) throw new AppError(422, 'DOES_NOT_FIT', problems.join(' '));
+  const plan = planKit(validation.design, layout, request.print, {
+    version: request.version,
+    date: today.toISOString().slice(0, 10),
+    printer: request.printer ? printerScale(request.printer) : undefined,
+  });
+  return { design: validation.design, layout, plan };
+}
+
+export async function renderKitPdf(input: RenderRequest, today?: Date): Promise<{ bytes: Uint8Array; sheets: number; fileName: string }> {
+  const { design, plan } = prepareKit(input, today);
+  const pdf = await createPdfDocument({ title: `${design.name}: drilling templates`, subject: 'Canwright kit', creationDate: today });
+  plan.imposition.sheets.forEach((sheet, i) => plan.drawSheet(i, pdf.addSheet(sheet.widthMm, sheet.heightMm, plan.transform)));
+  return { bytes: await pdf.save(), sheets: plan.imposition.sheets.length, fileName: `${fileStem(design.name)}-kit.pdf` };
+}
+
+/** One SVG file per sheet. */
+export function renderKitSvg(input: RenderRequest, today?: Date): { sheets: string[]; fileStem: string } {
+  const { design, plan } = prepareKit(input, today);
+  const sheets = plan.imposition.sheets.map((sheet, i) => {
+    const svg = createSvgSheet(sheet.widthMm, sheet.heightMm, { title: `${design.name}: sheet ${i + 1} of ${plan.imposition.sheets.length}`, transform: plan.transform });
+    plan.drawSheet(i, svg.context);
+    return svg.toString();
+  });
+  return { sheets, fileStem: fileStem(design.name) };
+}
+
+export function renderHoleCsv(input: RenderRequest): { csv: string; fileName: string } {
+  const request = renderRequestSchema.parse(input);
+  const validation = validateDesign(request.design);
+  if (!validation.ok) throw new AppError(400, 'INVALID_DESIGN', 'The design is not valid.', { fields: validation.problems.map((p) => ({ path: `design.${p.path}`, message: p.message })) });
+  return { csv: formatHoleCsv(layoutDesign(validation.design)), fileName: `${fileStem(validation.design.name)}-holes.csv` };
+}
+
+/** The calibration sheet on its own, portrait on the chosen paper. */
+export async function renderCalibrationPdf(options: PrintOptions, draw: (ctx: DrawingContext, marginMm: number) => void = drawCalibrationSheet): Promise<Uint8Array> {
+  const { widthMm, heightMm } = sheetSize(paperSizes[options.paper], 'portrait');
+  const pdf = await createPdfDocument({ title: 'Canwright printer calibration' });
+  draw(pdf.addSheet(widthMm, heightMm), options.marginMm);
+  return pdf.save();
+}
+
+function fileStem(name: string): string {
+  return (
+    name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-+|-+$/g, '')
+      .slice(0, 60) || 'design'
+  );
+}
