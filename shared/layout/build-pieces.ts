@@ -6,6 +6,9 @@ import { normalizeDeg } from './angles.ts';
 import { placeSideRow } from './side-row.ts';
 import { usableBottomDiameterMm, wrapStripLengthMm } from '../vessels/vessel.ts';
 
+/** A hole mark's crosshair runs this far past the hole's edge (see shared/print/draw-hole.ts). */
+export const MARK_REACH_PAST_HOLE_MM = 2;
+
 /** Paper past the end of a wrap strip, to tape over its start (common practice, no source). */
 export const OVERLAP_TAB_MM = 15;
 
@@ -82,6 +85,7 @@ export function buildPart(part: Part, design: Design, drills: DrillLookup): Plac
         vesselDiameterMm: vessel.outerDiameterMm,
         overlapTabMm: OVERLAP_TAB_MM,
         seamAngleDeg: vessel.seamAngleDeg,
+        markReachMm: Math.max(0, ...band.rows.map((row) => resolveDrill(drills, row.drillId).diameterMm / 2)) + MARK_REACH_PAST_HOLE_MM,
       };
       out.pieces.push(strip);
       out.marks.push({ kind: 'seam-line', pieceId: strip.id, xMm: 0 });

@@ -29,6 +29,8 @@ export interface WrapStripPiece {
   /** Extra paper past the end, to tape over the start. */
   overlapTabMm: number;
   seamAngleDeg: number;
+  /** How far a hole mark (circle and crosshair) reaches from its centre, at most: room kept at the strip's ends. */
+  markReachMm: number;
 }
 
 /** A can end (bottom or lid): x, y from its centre, y towards the index mark's side. */

@@ -1,4 +1,4 @@
-import type { DrawingContext } from '../drawing/drawing-context.ts';
+import { estimateTextWidthMm, type DrawingContext } from '../drawing/drawing-context.ts';
 import type { Hole, Layout, WrapStripPiece } from '../layout/layout-types.ts';
 import { drawHoleMark } from './draw-hole.ts';
 import { strokes, type } from './draw-style.ts';
@@ -56,8 +56,11 @@ export function drawStrip(ctx: DrawingContext, piece: WrapStripPiece, placement:
     const first = holes[0]!;
     const visible = holes.filter((h) => h.xMm >= from && h.xMm <= to).sort((a, b) => a.xMm - b.xMm)[0];
     if (!visible) continue;
-    const labelX = Math.max(sx(from) + 1, sx(visible.xMm) - 3);
-    ctx.text(labelX, canY(first.yMm) - first.diameterMm / 2 - 2.6, `${rowId}: ${holes.length} × ${describeDrill(first, text)}`, type.label);
+    const label = `${rowId}: ${holes.length} × ${describeDrill(first, text)}`;
+    // Beside the row's first hole on this tile, but never past the tile's right end.
+    const room = sx(Math.min(to, L + piece.overlapTabMm)) - estimateTextWidthMm(label, type.label.sizeMm) - 1;
+    const labelX = Math.max(sx(from) + 1, Math.min(sx(visible.xMm) - 3, room));
+    ctx.text(labelX, canY(first.yMm) - first.diameterMm / 2 - 2.6, label, type.label);
   }
 
   const title = placement.tile && placement.tile.count > 1 ? `${piece.name} · ${text.tile(placement.tile.number, placement.tile.count)}` : piece.name;
@@ -82,6 +85,7 @@ function drawJoins(ctx: DrawingContext, placement: Placement, H: number, sx: (x:
     }
     ctx.line(sx(a), sy(0), sx(a), sy(H), strokes.guide);
     ctx.line(sx(b), sy(0), sx(b), sy(H), strokes.guide);
-    ctx.text(sx(mid), sy(H / 2) + 1, text.join(letter), { ...type.label, anchor: 'middle', weight: 'bold' });
+    // Upright in the narrow shared band, so it never runs past the tile.
+    ctx.text(sx(mid) + 1, sy(H / 2), text.join(letter), { ...type.label, anchor: 'middle', weight: 'bold', rotateDeg: 90 });
   }
 }

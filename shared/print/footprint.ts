@@ -11,22 +11,27 @@ export const FOOT_BAND_MM = 5;
 /** Room round a disc for its title, index mark and cut note, on every side. */
 export const DISC_LABEL_MM = 6;
 
+/** Room left and right of a strip (or tile) for hole marks that straddle its ends; at least 4 mm. */
+export function stripSideMm(piece: Extract<Piece, { kind: 'wrap-strip' }>): number {
+  return Math.max(4, piece.markReachMm + 0.5);
+}
+
 /**
  * The box a whole piece takes with its labels: a disc's square, or a strip's full x range
- * (0 .. length + tab) by its height and the two label bands.
+ * (0 .. length + tab) and its side room, by its height and the two label bands.
  */
 export function measurePiece(piece: Piece): { width: number; height: number } {
   if (piece.kind === 'disc') {
     const side = piece.diameterMm + 2 * DISC_LABEL_MM;
     return { width: side, height: side };
   }
-  return { width: piece.lengthMm + piece.overlapTabMm, height: piece.heightMm + LABEL_BAND_MM + FOOT_BAND_MM };
+  return { width: piece.lengthMm + piece.overlapTabMm + 2 * stripSideMm(piece), height: piece.heightMm + LABEL_BAND_MM + FOOT_BAND_MM };
 }
 
 /** Whether a piece fits the content rect on its own (a strip may be tiled to do so). */
 function fitsContent(piece: Piece, content: Rect): boolean {
   const { width, height } = measurePiece(piece);
-  if (piece.kind === 'wrap-strip') return height <= content.height && content.width > TILE_OVERLAP_MM;
+  if (piece.kind === 'wrap-strip') return height <= content.height && content.width > TILE_OVERLAP_MM + 2 * stripSideMm(piece);
   return width <= content.width && height <= content.height;
 }
 

@@ -33,7 +33,7 @@ function buildPieces(specs: PieceSpec[]): Piece[] {
     const common = { id: `piece${i}`, partId: 'p', role: 'burn-chamber' as const, name: `Piece ${i}`, vesselDiameterMm: 100 };
     return spec.kind === 'disc'
       ? { ...common, kind: 'disc', face: 'bottom', diameterMm: spec.diameterMm, indexAngleDeg: 0 }
-      : { ...common, ...spec, fromYMm: 0, toYMm: spec.heightMm, reference: 'bottom', vesselHeightMm: spec.heightMm, seamAngleDeg: 0 };
+      : { ...common, ...spec, fromYMm: 0, toYMm: spec.heightMm, reference: 'bottom', vesselHeightMm: spec.heightMm, seamAngleDeg: 0, markReachMm: 5 };
   });
 }
 

@@ -8,7 +8,7 @@ import { TILE_OVERLAP_MM } from './tile-strip.ts';
 
 function makeStrip(overrides: Partial<WrapStripPiece> = {}): WrapStripPiece {
   const heightMm = overrides.heightMm ?? 100;
-  return { kind: 'wrap-strip', id: 'strip', partId: 'p', role: 'burn-chamber', name: 'Burn chamber, wall', lengthMm: 200, heightMm, fromYMm: 0, toYMm: heightMm, reference: 'bottom', vesselHeightMm: heightMm, vesselDiameterMm: 63.6, overlapTabMm: 15, seamAngleDeg: 0, ...overrides };
+  return { kind: 'wrap-strip', id: 'strip', partId: 'p', role: 'burn-chamber', name: 'Burn chamber, wall', lengthMm: 200, heightMm, fromYMm: 0, toYMm: heightMm, reference: 'bottom', vesselHeightMm: heightMm, vesselDiameterMm: 63.6, overlapTabMm: 15, seamAngleDeg: 0, markReachMm: 5, ...overrides };
 }
 
 function makeDisc(overrides: Partial<DiscPiece> = {}): DiscPiece {

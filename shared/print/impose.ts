@@ -1,5 +1,5 @@
 import type { Piece } from '../layout/layout-types.ts';
-import { findFitProblem, LABEL_BAND_MM, measurePiece } from './footprint.ts';
+import { findFitProblem, LABEL_BAND_MM, measurePiece, stripSideMm } from './footprint.ts';
 import { layoutFurniture } from './furniture.ts';
 import type { Imposition, Placement, Rect, Sheet, StripTile } from './imposition-types.ts';
 import { packShelves } from './pack-shelves.ts';
@@ -80,23 +80,27 @@ function planImposition(pieces: readonly Piece[], options: PrintOptions): { impo
  */
 function countSheetsAtLeast(piece: Piece, content: Rect): number {
   if (piece.kind === 'disc') return 1;
-  const { width, height } = measurePiece(piece);
+  const { height } = measurePiece(piece);
+  const side = stripSideMm(piece);
   const shelvesPerSheet = Math.floor((content.height + PLACEMENT_GAP_MM) / (height + PLACEMENT_GAP_MM));
-  return Math.ceil(countTiles(width, content.width) / shelvesPerSheet);
+  return Math.ceil(countTiles(piece.lengthMm + piece.overlapTabMm, content.width - 2 * side) / shelvesPerSheet);
 }
 
 /** A piece's box, or one box per tile for a strip longer than the content is wide. */
 function cutFootprints(piece: Piece, contentWidth: number): Footprint[] {
   const { width, height } = measurePiece(piece);
   if (piece.kind === 'disc') return [{ piece, width, height }];
-  const tiles = splitStrip(width, contentWidth);
+  // Tiles split the strip itself; each keeps the side room for marks at its ends.
+  const side = stripSideMm(piece);
+  const tiles = splitStrip(piece.lengthMm + piece.overlapTabMm, contentWidth - 2 * side);
   if (tiles.length === 1) return [{ piece, width, height }];
-  return tiles.map((tile) => ({ piece, tile, width: tile.toXMm - tile.fromXMm, height }));
+  return tiles.map((tile) => ({ piece, tile, width: tile.toXMm - tile.fromXMm + 2 * side, height }));
 }
 
 /**
  * The drawing contract: strip x maps to sheet x = originX + x and strip y (up from the bottom
- * edge) to sheet y = originY - y, so a later tile's origin lies left of its rect; a disc's
+ * edge) to sheet y = originY - y; the shown strip starts stripSideMm in from the rect's left
+ * edge, so a later tile's origin lies left of its rect; a disc's
  * origin is its centre, in the middle of its square.
  */
 function placeFootprint(footprint: Footprint, rect: Rect): Placement {
@@ -106,7 +110,7 @@ function placeFootprint(footprint: Footprint, rect: Rect): Placement {
   }
   // The strip's bottom edge: under the label band and the strip's height.
   const originY = rect.y + LABEL_BAND_MM + piece.heightMm;
-  const placement: Placement = { pieceId: piece.id, rect, originX: rect.x - (tile?.fromXMm ?? 0), originY };
+  const placement: Placement = { pieceId: piece.id, rect, originX: rect.x + stripSideMm(piece) - (tile?.fromXMm ?? 0), originY };
   if (tile) placement.tile = tile;
   return placement;
 }

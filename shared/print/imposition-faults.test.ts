@@ -5,7 +5,7 @@ import type { Imposition } from './imposition-types.ts';
 import { listImpositionFaults } from './imposition-faults.ts';
 
 // The fault finder is what the imposition tests lean on, so it must itself catch faults.
-const strip: Piece = { kind: 'wrap-strip', id: 's', partId: 'p', role: 'shell', name: 'Wall', lengthMm: 300, heightMm: 50, fromYMm: 0, toYMm: 50, reference: 'bottom', vesselHeightMm: 50, vesselDiameterMm: 127, overlapTabMm: 15, seamAngleDeg: 0 };
+const strip: Piece = { kind: 'wrap-strip', id: 's', partId: 'p', role: 'shell', name: 'Wall', lengthMm: 300, heightMm: 50, fromYMm: 0, toYMm: 50, reference: 'bottom', vesselHeightMm: 50, vesselDiameterMm: 127, overlapTabMm: 15, seamAngleDeg: 0, markReachMm: 5 };
 const disc: Piece = { kind: 'disc', id: 'd', partId: 'p', role: 'shell', name: 'End', face: 'bottom', diameterMm: 30, vesselDiameterMm: 127, indexAngleDeg: 0 };
 const pieces = [strip, disc];
 

@@ -1,5 +1,5 @@
 import type { Piece } from '../layout/layout-types.ts';
-import { DISC_LABEL_MM, FOOT_BAND_MM, LABEL_BAND_MM } from './footprint.ts';
+import { DISC_LABEL_MM, FOOT_BAND_MM, LABEL_BAND_MM, stripSideMm } from './footprint.ts';
 import type { Imposition, Placement, Rect } from './imposition-types.ts';
 import { PLACEMENT_GAP_MM } from './impose.ts';
 import { TILE_OVERLAP_MM } from './tile-strip.ts';
@@ -55,8 +55,9 @@ function checkContract(piece: Piece, p: Placement): string[] {
   }
   const from = p.tile?.fromXMm ?? 0;
   const to = p.tile?.toXMm ?? piece.lengthMm + piece.overlapTabMm;
-  near(p.originX + from, p.rect.x, 'left edge of the shown strip');
-  near(p.originX + to, p.rect.x + p.rect.width, 'right edge of the shown strip');
+  const side = stripSideMm(piece);
+  near(p.originX + from, p.rect.x + side, 'left edge of the shown strip');
+  near(p.originX + to, p.rect.x + p.rect.width - side, 'right edge of the shown strip');
   near(p.originY - piece.heightMm, p.rect.y + LABEL_BAND_MM, 'top edge');
   near(p.originY + FOOT_BAND_MM, p.rect.y + p.rect.height, 'bottom band');
   return faults;
