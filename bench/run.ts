@@ -1,5 +1,7 @@
 import { benchLayout } from './layout-bench.ts';
+import { benchPdf } from './pdf-bench.ts';
 
 /** npm run bench: speed and size figures (machine-dependent; compare runs on one machine). */
 console.log(`Canwright benchmarks on Node ${process.version}`);
 benchLayout();
+await benchPdf();
