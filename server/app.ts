@@ -11,10 +11,13 @@ import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { loadSession } from './http/session.ts';
 import type { MailCapture } from './mail/mail-capture.ts';
+import { createPrinterProfileRepository } from './printer-profiles/printer-profile-repository.ts';
+import { createPrinterProfileUseCases } from './printer-profiles/printer-profile-use-cases.ts';
 import { accountRoutes } from './routes/account-routes.ts';
 import { adminRoutes } from './routes/admin-routes.ts';
 import { devMailRoutes } from './routes/dev-mail-routes.ts';
 import { healthRoutes } from './routes/health-routes.ts';
+import { printerProfileRoutes } from './routes/printer-profile-routes.ts';
 import { renderRoutes } from './routes/render-routes.ts';
 
 export interface AppDeps {
@@ -51,6 +54,7 @@ export function createApp(deps: AppDeps): Express {
 
   const db = deps.database.db;
   app.use('/api/account', accountRoutes(createAccountUseCases(createAccountRepository(db))));
+  app.use('/api/printer-profiles', printerProfileRoutes(createPrinterProfileUseCases(createPrinterProfileRepository(db))));
   app.use('/api/admin', adminRoutes(createAdminUseCases(deps.auth, createUserDirectory(db))));
   if (deps.mailCapture) app.use('/api/dev/mail', devMailRoutes(deps.mailCapture));
   app.use('/api', apiNotFound);

@@ -1,4 +1,5 @@
-import { boolean, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { boolean, doublePrecision, index, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 
 /**
  * Tables behind sign-in, in the shape better-auth (with its admin plugin) reads and writes.
@@ -73,4 +74,28 @@ export const verifications = pgTable(
   (table) => [index('verifications_identifier_idx').on(table.identifier)],
 );
 
-export const schema = { users, sessions, accounts, verifications };
+/**
+ * A maker's printer profiles: what they measured on the calibration sheet's 150 mm and 200 mm
+ * rulers. The partial unique index keeps at most one default per user even if two writes race.
+ */
+export const printerProfiles = pgTable(
+  'printer_profiles',
+  {
+    id: text('id').primaryKey(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    measuredXMm: doublePrecision('measured_x_mm').notNull(),
+    measuredYMm: doublePrecision('measured_y_mm').notNull(),
+    isDefault: boolean('is_default').notNull().default(false),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [
+    index('printer_profiles_user_id_idx').on(table.userId),
+    uniqueIndex('printer_profiles_one_default_idx').on(table.userId).where(sql`${table.isDefault}`),
+  ],
+);
+
+export const schema = { users, sessions, accounts, verifications, printerProfiles };

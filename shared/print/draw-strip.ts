@@ -78,7 +78,8 @@ function drawJoins(ctx: DrawingContext, placement: Placement, H: number, sx: (x:
   for (const [letter, a, b] of joins) {
     if (!letter) continue;
     const mid = (a + b) / 2;
-    for (const y of [H * 0.25, H * 0.75]) {
+    // Near both edges of the strip, clear of the upright join label in the middle.
+    for (const y of [Math.min(6, H * 0.15), H - Math.min(6, H * 0.15)]) {
       ctx.line(sx(mid) - 3, sy(y), sx(mid) + 3, sy(y), strokes.cross);
       ctx.line(sx(mid), sy(y) - 3, sx(mid), sy(y) + 3, strokes.cross);
       ctx.circle(sx(mid), sy(y), 1.5, { stroke: strokes.cross });

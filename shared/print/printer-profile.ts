@@ -16,3 +16,25 @@ export type PrinterProfileInput = z.infer<typeof printerProfileInputSchema>;
 export function printerScale(profile: Pick<PrinterProfileInput, 'measuredXMm' | 'measuredYMm'>): PrinterScale {
   return { scaleX: profile.measuredXMm / CALIBRATION_X_MM, scaleY: profile.measuredYMm / CALIBRATION_Y_MM };
 }
+
+/**
+ * A saved profile as the API returns it (/api/printer-profiles). scaleX/Y are what the kit is
+ * divided by; errorX/YPercent is how far the printer is off, +1.5 = prints 1.5 % long.
+ */
+export const printerProfileSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  measuredXMm: z.number(),
+  measuredYMm: z.number(),
+  isDefault: z.boolean(),
+  scaleX: z.number(),
+  scaleY: z.number(),
+  errorXPercent: z.number(),
+  errorYPercent: z.number(),
+  createdAt: z.string(),
+});
+export type PrinterProfile = z.infer<typeof printerProfileSchema>;
+
+/** GET /api/printer-profiles: the default first, then the newest. */
+export const printerProfileListSchema = z.object({ profiles: z.array(printerProfileSchema) });
+export type PrinterProfileList = z.infer<typeof printerProfileListSchema>;
