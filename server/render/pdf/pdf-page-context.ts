@@ -90,13 +90,13 @@ export class PdfPageContext implements DrawingContext {
     const cos = Math.cos(rad);
     const sin = Math.sin(rad);
     // The text runs along (cos, -sin) in y-down sheet space: counter-clockwise on paper.
-    const back = shift === 0 ? 0 : font.widthOfTextAtSize(text, size) * shift;
+    const back = shift === 0 ? 0 : measureText(font, text) * size * shift;
     const ox = x - back * cos;
     const oy = y + back * sin;
     const matrix = [size * cos, -size * sin, -size * sin, -size * cos, ox, oy].map(fmt).join(' ');
     this.setFill(style.color);
     const name = this.useFont(weight);
-    this.append(`BT /${name} 1 Tf ${matrix} Tm ${font.encodeText(text).toString()} Tj ET\n`);
+    this.append(`BT /${name} 1 Tf ${matrix} Tm ${encodeText(font, text)} Tj ET\n`);
   }
 
   /** Closes the page's graphics state and returns its content stream, uncompressed. */
@@ -170,3 +170,23 @@ export function pageMatrix(heightPt: number, scaleX: number, scaleY: number): st
   const f = (n: number): string => String(Math.round(n * 1e6) / 1e6);
   return `${f(PT_PER_MM * scaleX)} 0 0 ${f(-PT_PER_MM * scaleY)} 0 ${f(heightPt)}`;
 }
+
+/**
+ * Kits print the same short strings again and again (ruler numbers, drill labels); fontkit's
+ * glyph lookup is the costly part of text, so each font keeps what it has already encoded.
+ */
+const encoded = new WeakMap<PDFFont, Map<string, { hex: string; widthAt1: number }>>();
+
+function lookup(font: PDFFont, text: string): { hex: string; widthAt1: number } {
+  let cache = encoded.get(font);
+  if (!cache) encoded.set(font, (cache = new Map()));
+  let entry = cache.get(text);
+  if (!entry) {
+    entry = { hex: font.encodeText(text).toString(), widthAt1: font.widthOfTextAtSize(text, 1) };
+    cache.set(text, entry);
+  }
+  return entry;
+}
+
+const encodeText = (font: PDFFont, text: string) => lookup(font, text).hex;
+const measureText = (font: PDFFont, text: string) => lookup(font, text).widthAt1;
