@@ -94,7 +94,7 @@ export function buildPart(part: Part, design: Design, drills: DrillLookup): Plac
         const yMm = rowHeight(row, vessel.heightMm);
         const { positions, dropped } = placeSideRow(row, drill.diameterMm, vessel.outerDiameterMm);
         if (dropped.length) out.dropped.set(row.id, dropped.length);
-        out.marks.push({ kind: 'row-line', pieceId: strip.id, sourceId: row.id, yMm });
+        out.marks.push({ kind: 'row-line', pieceId: strip.id, sourceId: row.id, label: row.label ?? row.id, yMm });
         for (const position of positions) {
           out.holes.push({
             id: `${strip.id}/${row.id}/${position.index}`,
@@ -134,7 +134,7 @@ export function buildPart(part: Part, design: Design, drills: DrillLookup): Plac
     for (const pattern of patterns) {
       const drill = resolveDrill(drills, pattern.drillId);
       const { rings, positions } = placeEndPattern(pattern);
-      for (const ring of rings) out.marks.push({ kind: 'ring-circle', pieceId: disc.id, sourceId: pattern.id, radiusMm: ring.radiusMm });
+      for (const ring of rings) out.marks.push({ kind: 'ring-circle', pieceId: disc.id, sourceId: pattern.id, label: pattern.label ?? pattern.id, radiusMm: ring.radiusMm });
       for (const position of positions) {
         // Angles run counter-clockwise from the index mark, which is drawn straight up (+y).
         const theta = ((position.angleDeg + 90) * Math.PI) / 180;

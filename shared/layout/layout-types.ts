@@ -71,8 +71,8 @@ export interface Hole {
 /** Construction and reference marks the templates draw. */
 export type Mark =
   | { kind: 'seam-line'; pieceId: string; xMm: number }
-  | { kind: 'row-line'; pieceId: string; sourceId: string; yMm: number }
-  | { kind: 'ring-circle'; pieceId: string; sourceId: string; radiusMm: number }
+  | { kind: 'row-line'; pieceId: string; sourceId: string; label: string; yMm: number }
+  | { kind: 'ring-circle'; pieceId: string; sourceId: string; label: string; radiusMm: number }
   | { kind: 'centre-cross'; pieceId: string }
   | { kind: 'index-mark'; pieceId: string; angleDeg: number };
 

@@ -20,9 +20,13 @@ export function drawRuler(ctx: DrawingContext, rect: Rect, axis: 'x' | 'y'): voi
     const [x2, y2] = at(along, fromEdge === 0 ? depth : 1 - depth);
     ctx.line(x1, y1, x2, y2, strokes.tick);
   };
-  const label = (along: number, across: number, text: string) => {
-    const [x, y] = at(along, across);
-    ctx.text(x, y, text, { ...type.tiny, anchor: 'middle', rotateDeg: axis === 'x' ? 0 : 90 });
+  // Numbers sit just past their tick (never on it), the mm numbers in the mm half and the inch
+  // numbers in the inch half. Depths are measured from the mm edge; rotated text on the
+  // vertical ruler has its glyphs on the other side of its baseline, hence the two depths.
+  const label = (along: number, glyphFrom: number, glyphTo: number, text: string) => {
+    const depth = axis === 'x' ? glyphTo : glyphFrom;
+    const [x, y] = at(along + 0.5, depth / (axis === 'x' ? rect.height : rect.width));
+    ctx.text(x, y, text, { ...type.tiny, anchor: axis === 'x' ? 'start' : 'end', rotateDeg: axis === 'x' ? 0 : 90 });
   };
 
   const [bx1, by1] = at(0, 0.5);
@@ -30,15 +34,15 @@ export function drawRuler(ctx: DrawingContext, rect: Rect, axis: 'x' | 'y'): voi
   ctx.line(bx1, by1, bx2, by2, strokes.frame);
   for (let mm = 0; mm <= 100; mm++) {
     tick(mm, 0, mm % 10 === 0 ? 4.5 : mm % 5 === 0 ? 3.2 : 2);
-    if (mm % 10 === 0) label(mm, 0.58, String(mm));
+    if (mm % 10 === 0) label(mm, 4.7, 6.0, String(mm));
   }
   for (let sixteenth = 0; sixteenth <= 64; sixteenth++) {
     const length = sixteenth % 16 === 0 ? 4.5 : sixteenth % 8 === 0 ? 3.6 : sixteenth % 4 === 0 ? 2.8 : sixteenth % 2 === 0 ? 2.2 : 1.6;
     tick((sixteenth * MM_PER_INCH) / 16, 1, length);
-    if (sixteenth % 16 === 0) label((sixteenth * MM_PER_INCH) / 16, 0.5, `${sixteenth / 16}`);
+    if (sixteenth % 16 === 0) label((sixteenth * MM_PER_INCH) / 16, 6.3, 7.6, `${sixteenth / 16}`);
   }
-  label(-2.3, 0.35, 'mm');
-  label(-2.3, 0.85, 'in');
+  label(-3.6, 1.5, 2.8, 'mm');
+  label(-3.6, 9, 10.3, 'in');
 }
 
 /** The 1 in and 25 mm check squares, side by side. */

@@ -56,7 +56,9 @@ export function drawStrip(ctx: DrawingContext, piece: WrapStripPiece, placement:
     const first = holes[0]!;
     const visible = holes.filter((h) => h.xMm >= from && h.xMm <= to).sort((a, b) => a.xMm - b.xMm)[0];
     if (!visible) continue;
-    const label = `${rowId}: ${holes.length} × ${describeDrill(first, text)}`;
+    const rowMark = layout.marks.find((m) => m.kind === 'row-line' && m.pieceId === piece.id && m.sourceId === rowId);
+    const name = rowMark?.kind === 'row-line' ? rowMark.label : rowId;
+    const label = `${name}: ${holes.length} × ${describeDrill(first, text)}`;
     // Beside the row's first hole on this tile, but never past the tile's right end.
     const room = sx(Math.min(to, L + piece.overlapTabMm)) - estimateTextWidthMm(label, type.label.sizeMm) - 1;
     const labelX = Math.max(sx(from) + 1, Math.min(sx(visible.xMm) - 3, room));
