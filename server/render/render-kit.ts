@@ -4,7 +4,7 @@ import { validateDesign } from '../../shared/design/index.ts';
 import type { DrawingContext } from '../../shared/drawing/drawing-context.ts';
 import { formatHoleCsv, layoutDesign, type Layout } from '../../shared/layout/index.ts';
 import { drawCalibrationSheet } from '../../shared/print/draw-calibration.ts';
-import { checkImposable, paperSizes, printOptionsSchema, sheetSize, type PrintOptions } from '../../shared/print/index.ts';
+import { checkImposable, ImpositionError, paperSizes, printOptionsSchema, sheetSize, type PrintOptions } from '../../shared/print/index.ts';
 import { planKit, type KitPlan } from '../../shared/print/plan-kit.ts';
 import { printerScale } from '../../shared/print/printer-profile.ts';
 import { AppError } from '../http/app-error.ts';
@@ -38,12 +38,18 @@ export function prepareKit(input: RenderRequest, today = new Date()): PreparedKi
   if (tooMany) throw new AppError(422, 'TOO_MANY_HOLES', tooMany.message);
   const problems = checkImposable(layout.pieces, request.print);
   if (problems.length) throw new AppError(422, 'DOES_NOT_FIT', problems.join(' '));
-  const plan = planKit(validation.design, layout, request.print, {
-    version: request.version,
-    date: today.toISOString().slice(0, 10),
-    printer: request.printer ? printerScale(request.printer) : undefined,
-  });
-  return { design: validation.design, layout, plan };
+  try {
+    const plan = planKit(validation.design, layout, request.print, {
+      version: request.version,
+      date: today.toISOString().slice(0, 10),
+      printer: request.printer ? printerScale(request.printer) : undefined,
+    });
+    return { design: validation.design, layout, plan };
+  } catch (error) {
+    // The sheet cap and other imposition limits are the request's fault, not the server's.
+    if (error instanceof ImpositionError) throw new AppError(422, 'DOES_NOT_FIT', error.message);
+    throw error;
+  }
 }
 
 export async function renderKitPdf(input: RenderRequest, today?: Date): Promise<{ bytes: Uint8Array; sheets: number; fileName: string }> {

@@ -155,5 +155,21 @@ export function buildPart(part: Part, design: Design, drills: DrillLookup): Plac
       }
     }
   }
+  // A flame concentrator is cut from a can end: its template is that end with the opening to cut out.
+  if (part.role === 'concentrator' && part.openingDiameterMm !== undefined && !out.pieces.some((p) => p.id === `${part.id}:lid`)) {
+    const disc: DiscPiece = {
+      kind: 'disc',
+      id: `${part.id}:lid`,
+      partId: part.id,
+      role: part.role,
+      name: `${name}, opening`,
+      face: 'lid',
+      diameterMm: usableBottomDiameterMm(vessel),
+      vesselDiameterMm: vessel.outerDiameterMm,
+      indexAngleDeg: vessel.seamAngleDeg,
+    };
+    out.pieces.push(disc);
+    out.marks.push({ kind: 'centre-cross', pieceId: disc.id }, { kind: 'opening-circle', pieceId: disc.id, radiusMm: part.openingDiameterMm / 2 });
+  }
   return out;
 }

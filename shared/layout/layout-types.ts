@@ -74,6 +74,8 @@ export type Mark =
   | { kind: 'row-line'; pieceId: string; sourceId: string; label: string; yMm: number }
   | { kind: 'ring-circle'; pieceId: string; sourceId: string; label: string; radiusMm: number }
   | { kind: 'centre-cross'; pieceId: string }
+  /** A circle to cut out whole: a flame concentrator's opening. */
+  | { kind: 'opening-circle'; pieceId: string; radiusMm: number }
   | { kind: 'index-mark'; pieceId: string; angleDeg: number };
 
 export type Severity = 'error' | 'warning' | 'note';

@@ -3,7 +3,7 @@ import type { DiscPiece, Hole, Layout } from '../layout/layout-types.ts';
 import { drawHoleMark } from './draw-hole.ts';
 import { strokes, type } from './draw-style.ts';
 import type { Placement } from './imposition-types.ts';
-import { describeDrill, type KitText } from './kit-text.ts';
+import { describeDrill, describeLength, type KitText } from './kit-text.ts';
 
 /**
  * A can-end disc: the cut circle (the flat inside the rim), centre cross, a construction circle
@@ -19,7 +19,15 @@ export function drawDisc(ctx: DrawingContext, piece: DiscPiece, placement: Place
   ctx.line(cx, cy - 4, cx, cy + 4, strokes.cross);
 
   for (const mark of layout.marks) {
-    if (mark.kind === 'ring-circle' && mark.pieceId === piece.id) ctx.circle(cx, cy, mark.radiusMm, { stroke: strokes.guide });
+    if (mark.pieceId !== piece.id) continue;
+    if (mark.kind === 'ring-circle') ctx.circle(cx, cy, mark.radiusMm, { stroke: strokes.guide });
+    if (mark.kind === 'opening-circle') {
+      ctx.circle(cx, cy, mark.radiusMm, { stroke: strokes.cut });
+      // Below the centre cross, inside the opening when there is room, else under it.
+      const y = mark.radiusMm > 14 ? cy + 7 : cy + mark.radiusMm + 3.5;
+      ctx.text(cx, y, text.cutOpening, { ...type.small, anchor: 'middle' });
+      ctx.text(cx, y + 3.6, describeLength(mark.radiusMm * 2, text), { ...type.small, anchor: 'middle' });
+    }
   }
   // Index mark: a small triangle pointing at the rim, straight up.
   ctx.polyline([[cx, cy - R], [cx - 1.6, cy - R - 3], [cx + 1.6, cy - R - 3]], { fill: 'ink', closed: true });
@@ -35,5 +43,5 @@ export function drawDisc(ctx: DrawingContext, piece: DiscPiece, placement: Place
   }
   ctx.text(placement.rect.x + 1, placement.rect.y + 4, piece.name, type.title);
   const summary = [...sizes.values()].map(({ hole, count }) => `${count} × ${describeDrill(hole, text)}`).join(', ');
-  ctx.text(cx, cy + R + 4.2, `${text.cutOut} · ${summary}`, { ...type.small, anchor: 'middle' });
+  ctx.text(cx, cy + R + 4.2, summary ? `${text.cutOut} · ${summary}` : text.cutOut, { ...type.small, anchor: 'middle' });
 }

@@ -45,6 +45,7 @@ export function drawFurniture(ctx: DrawingContext, sheet: Sheet, sheetCount: num
     const line = `${count} × ${describeDrill(hole, text)}${pilot ? `, pilot ${pilot}` : ''}`;
     ctx.text(l.x + 1.5, l.y + 8 + i * 3.6, fit(line, l.width - 3, type.small.sizeMm), type.small);
   });
+  if (legend.length === 0) ctx.text(l.x + 1.5, l.y + 8, 'No holes on this sheet', type.small);
   if (legend.length > rowsThatFit) ctx.text(l.x + 1.5, l.y + l.height - 1.2, `and ${legend.length - rowsThatFit} more sizes (see the build sheet)`, type.tiny);
 
   const n = f.notes;

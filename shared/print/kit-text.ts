@@ -12,6 +12,7 @@ export interface KitText {
   topEdge: string;
   tapeTab: string;
   cutOut: string;
+  cutOpening: string;
   indexMark: string;
   tile(n: number, of: number): string;
   join(letter: string): string;
@@ -29,6 +30,7 @@ export function kitText(units: UnitSystem): KitText {
     topEdge: 'Top edge: level with the rim of the can',
     tapeTab: 'Tape over the start',
     cutOut: 'Cut on this line',
+    cutOpening: 'Cut out the opening',
     indexMark: 'Line up with the seam',
     tile: (n, of) => `part ${n} of ${of}`,
     join: (letter) => `join ${letter} to ${letter}`,
@@ -42,4 +44,9 @@ export function describeDrill(hole: Pick<Hole, 'drillLabel' | 'diameterMm'>, tex
   if (hole.drillLabel.endsWith(' in')) return text.units === 'in' ? `${hole.drillLabel} (${mm})` : `${mm} (${hole.drillLabel})`;
   if (hole.drillLabel.endsWith(' mm')) return text.units === 'mm' ? hole.drillLabel : `${hole.drillLabel} (${formatInches(hole.diameterMm)})`;
   return `${hole.drillLabel} (${text.units === 'in' ? formatInches(hole.diameterMm) + ', ' : ''}${mm})`;
+}
+
+/** A length in the maker's units first, the other in brackets: "2 1/16 in (52 mm)". */
+export function describeLength(mm: number, text: Pick<KitText, 'units'>): string {
+  return text.units === 'in' ? `${formatInches(mm)} (${formatMm(mm)})` : `${formatMm(mm)} (${formatInches(mm)})`;
 }

@@ -30,3 +30,13 @@ describe('example designs in templates/', () => {
     expect(lines[1]).toMatch(/^chamber:wall,secondary,0,\d+\.\d{4},\d+\.\d{4},4\.7625,3\/16 in$/);
   });
 });
+
+describe('a flame concentrator', () => {
+  it('gets a template of its can end with the opening to cut out (0.6 D of the chamber in the example)', () => {
+    const result = layoutDocument(JSON.parse(readFileSync(join(dir, 'seam-keepout-concentrator.json'), 'utf8')));
+    if (!result.ok) throw new Error('example should be valid');
+    const piece = result.layout.pieces.find((p) => p.id === 'concentrator:lid');
+    expect(piece).toMatchObject({ kind: 'disc', face: 'lid' });
+    expect(result.layout.marks).toContainEqual({ kind: 'opening-circle', pieceId: 'concentrator:lid', radiusMm: 26 });
+  });
+});
