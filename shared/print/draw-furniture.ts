@@ -34,23 +34,41 @@ export function drawFurniture(ctx: DrawingContext, sheet: Sheet, sheetCount: num
     [`Version ${info.version} · ${info.date}`, type.small],
     [`${text.sheet(sheet.number, sheetCount)} · units: ${text.units === 'in' ? 'inches' : 'millimetres'}`, type.small],
   ];
-  titleLines.forEach(([line, style], i) => ctx.text(t.x + 1.5, t.y + 4.5 + i * 5, line, style));
+  titleLines.forEach(([line, style], i) => ctx.text(t.x + 1.5, t.y + 4.5 + i * 5.2, line, style));
 
   const l = f.drillLegend;
   ctx.rect(l.x, l.y, l.width, l.height, { stroke: strokes.frame });
   ctx.text(l.x + 1.5, l.y + 4, 'Drills on this sheet', { ...type.label, weight: 'bold' });
-  const rowsThatFit = Math.max(1, Math.floor((l.height - 6) / 3.6));
+  const rowsThatFit = Math.max(1, Math.floor((l.height - 6) / 3.8));
   legend.slice(0, rowsThatFit).forEach(({ hole, count }, i) => {
     const pilot = info.pilots.get(hole.drillId);
     const line = `${count} × ${describeDrill(hole, text)}${pilot ? `, pilot ${pilot}` : ''}`;
-    ctx.text(l.x + 1.5, l.y + 8 + i * 3.6, fit(line, l.width - 3, type.small.sizeMm), type.small);
+    ctx.text(l.x + 1.5, l.y + 8.2 + i * 3.8, fit(line, l.width - 3, type.small.sizeMm), type.small);
   });
   if (legend.length === 0) ctx.text(l.x + 1.5, l.y + 8, 'No holes on this sheet', type.small);
   if (legend.length > rowsThatFit) ctx.text(l.x + 1.5, l.y + l.height - 1.2, `and ${legend.length - rowsThatFit} more sizes (see the build sheet)`, type.tiny);
 
   const n = f.notes;
-  ctx.text(n.x, n.y + 3.6, text.printNote, { ...type.label, weight: 'bold' });
-  ctx.text(n.x, n.y + 8, fit(text.safetyNote, n.width, type.tiny.sizeMm), type.tiny);
+  ctx.text(n.x, n.y + 2.9, text.printNote, { ...type.label, weight: 'bold' });
+  // The safety note is never cut short: it wraps onto a second line.
+  wrap(text.safetyNote, n.width, type.tiny.sizeMm)
+    .slice(0, 2)
+    .forEach((line, i) => ctx.text(n.x, n.y + 6.3 + i * 3.1, line, type.tiny));
+}
+
+/** Splits text at spaces into lines that fit a width (at about 0.55 em a character). */
+function wrap(text: string, widthMm: number, sizeMm: number): string[] {
+  const max = Math.floor(widthMm / (sizeMm * 0.55));
+  const lines: string[] = [];
+  let line = '';
+  for (const word of text.split(' ')) {
+    if (line && line.length + 1 + word.length > max) {
+      lines.push(line);
+      line = word;
+    } else line = line ? `${line} ${word}` : word;
+  }
+  if (line) lines.push(line);
+  return lines;
 }
 
 /** Cuts text that would run past a box (at about 0.55 em a character) and marks the cut. */

@@ -34,15 +34,15 @@ export function drawRuler(ctx: DrawingContext, rect: Rect, axis: 'x' | 'y'): voi
   ctx.line(bx1, by1, bx2, by2, strokes.frame);
   for (let mm = 0; mm <= 100; mm++) {
     tick(mm, 0, mm % 10 === 0 ? 4.5 : mm % 5 === 0 ? 3.2 : 2);
-    if (mm % 10 === 0) label(mm, 4.7, 6.0, String(mm));
+    if (mm % 10 === 0) label(mm, 4.6, 6.1, String(mm));
   }
   for (let sixteenth = 0; sixteenth <= 64; sixteenth++) {
     const length = sixteenth % 16 === 0 ? 4.5 : sixteenth % 8 === 0 ? 3.6 : sixteenth % 4 === 0 ? 2.8 : sixteenth % 2 === 0 ? 2.2 : 1.6;
     tick((sixteenth * MM_PER_INCH) / 16, 1, length);
-    if (sixteenth % 16 === 0) label((sixteenth * MM_PER_INCH) / 16, 6.3, 7.6, `${sixteenth / 16}`);
+    if (sixteenth % 16 === 0) label((sixteenth * MM_PER_INCH) / 16, 6.3, 7.8, `${sixteenth / 16}`);
   }
-  label(-3.6, 1.5, 2.8, 'mm');
-  label(-3.6, 9, 10.3, 'in');
+  label(-4, 1.3, 2.8, 'mm');
+  label(-4, 9, 10.5, 'in');
 }
 
 /** The 1 in and 25 mm check squares, side by side. */

@@ -11,9 +11,10 @@ export const strokes = {
   frame: { widthMm: 0.2, color: 'soft' },
 } satisfies Record<string, Stroke>;
 
+/** Type sizes (em in mm): labels at 2.8 mm are 8 pt, readable at arm's length; nothing below 2 mm (5.7 pt). */
 export const type = {
   title: { sizeMm: 3.6, weight: 'bold', color: 'ink' },
-  label: { sizeMm: 2.6, color: 'ink' },
-  small: { sizeMm: 2.1, color: 'soft' },
-  tiny: { sizeMm: 1.7, color: 'soft' },
+  label: { sizeMm: 2.8, color: 'ink' },
+  small: { sizeMm: 2.4, color: 'soft' },
+  tiny: { sizeMm: 2.0, color: 'soft' },
 } satisfies Record<string, TextStyle>;
