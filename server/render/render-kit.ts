@@ -29,22 +29,19 @@ interface PreparedKit {
 /** Validates the design, lays it out and imposes it; bad input becomes a 400/422 with reasons. */
 export function prepareKit(input: RenderRequest, today = new Date()): PreparedKit {
   const request = renderRequestSchema.parse(input);
-  const validation = validateDesign(request.design);
-  if (!validation.ok) {
-    throw new AppError(400, 'INVALID_DESIGN', 'The design is not valid.', { fields: validation.problems.map((p) => ({ path: `design.${p.path}`, message: p.message })) });
-  }
-  const layout = layoutDesign(validation.design);
+  const design = validDesign(request.design);
+  const layout = layoutDesign(design);
   const tooMany = layout.findings.find((f) => f.rule === 'too-many-holes');
   if (tooMany) throw new AppError(422, 'TOO_MANY_HOLES', tooMany.message);
   const problems = checkImposable(layout.pieces, request.print);
   if (problems.length) throw new AppError(422, 'DOES_NOT_FIT', problems.join(' '));
   try {
-    const plan = planKit(validation.design, layout, request.print, {
+    const plan = planKit(design, layout, request.print, {
       version: request.version,
       date: today.toISOString().slice(0, 10),
       printer: request.printer ? printerScale(request.printer) : undefined,
     });
-    return { design: validation.design, layout, plan };
+    return { design, layout, plan };
   } catch (error) {
     // The sheet cap and other imposition limits are the request's fault, not the server's.
     if (error instanceof ImpositionError) throw new AppError(422, 'DOES_NOT_FIT', error.message);
@@ -71,10 +68,8 @@ export function renderKitSvg(input: RenderRequest, today?: Date): { sheets: stri
 }
 
 export function renderHoleCsv(input: RenderRequest): { csv: string; fileName: string } {
-  const request = renderRequestSchema.parse(input);
-  const validation = validateDesign(request.design);
-  if (!validation.ok) throw new AppError(400, 'INVALID_DESIGN', 'The design is not valid.', { fields: validation.problems.map((p) => ({ path: `design.${p.path}`, message: p.message })) });
-  return { csv: formatHoleCsv(layoutDesign(validation.design)), fileName: `${fileStem(validation.design.name)}-holes.csv` };
+  const design = validDesign(renderRequestSchema.parse(input).design);
+  return { csv: formatHoleCsv(layoutDesign(design)), fileName: `${fileStem(design.name)}-holes.csv` };
 }
 
 /** The calibration sheet on its own, portrait on the chosen paper. */
@@ -83,6 +78,13 @@ export async function renderCalibrationPdf(options: PrintOptions, draw: (ctx: Dr
   const pdf = await createPdfDocument({ title: 'Canwright printer calibration' });
   draw(pdf.addSheet(widthMm, heightMm), options.marginMm);
   return pdf.save();
+}
+
+/** The design, or a 400 listing each bad field under "design.". */
+function validDesign(input: unknown): Design {
+  const validation = validateDesign(input);
+  if (validation.ok) return validation.design;
+  throw new AppError(400, 'INVALID_DESIGN', 'The design is not valid.', { fields: validation.problems.map((p) => ({ path: `design.${p.path}`, message: p.message })) });
 }
 
 function fileStem(name: string): string {
