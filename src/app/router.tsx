@@ -37,6 +37,7 @@ export const router = createBrowserRouter([
             ),
           })),
       },
+      { path: 'printer', lazy: () => import('../features/printer-profiles/components/printer-calibration-page.tsx').then((m) => ({ Component: m.PrinterCalibrationPage })) },
       { path: 'dev/mail', lazy: () => import('../features/dev-mail/components/dev-mail-page.tsx').then((m) => ({ Component: m.DevMailPage })) },
       { path: '*', element: <NotFoundPage /> },
     ],
