@@ -1,3 +1,4 @@
+import { benchBundle } from './bundle-bench.ts';
 import { benchLayout } from './layout-bench.ts';
 import { benchPdf } from './pdf-bench.ts';
 
@@ -5,3 +6,4 @@ import { benchPdf } from './pdf-bench.ts';
 console.log(`Canwright benchmarks on Node ${process.version}`);
 benchLayout();
 await benchPdf();
+await benchBundle();

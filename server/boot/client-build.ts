@@ -21,7 +21,18 @@ export function clientBuildIsStale(root: string, clientDir: string): boolean {
   return inputs.some((input) => newestMtime(join(root, input)) > builtAt);
 }
 
+/**
+ * Always a production build: Vite keeps an inherited NODE_ENV (vitest sets "test"), which would
+ * bundle React's development build, twice the size, into dist/ for npm start to serve later.
+ */
 export async function buildClient(root: string): Promise<void> {
   const { build } = await import('vite');
-  await build({ root, logLevel: 'warn', configFile: join(root, 'vite.config.ts') });
+  const inherited = process.env.NODE_ENV;
+  process.env.NODE_ENV = 'production';
+  try {
+    await build({ root, mode: 'production', logLevel: 'warn', configFile: join(root, 'vite.config.ts') });
+  } finally {
+    if (inherited === undefined) delete process.env.NODE_ENV;
+    else process.env.NODE_ENV = inherited;
+  }
 }
