@@ -10,15 +10,19 @@ import type { Database } from './db/database.ts';
 import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { loadSession } from './http/session.ts';
+import { createDesignLibrary } from './library/design-library.ts';
+import { createDesignRepository } from './library/design-repository.ts';
 import type { MailCapture } from './mail/mail-capture.ts';
 import { createPrinterProfileRepository } from './printer-profiles/printer-profile-repository.ts';
 import { createPrinterProfileUseCases } from './printer-profiles/printer-profile-use-cases.ts';
 import { accountRoutes } from './routes/account-routes.ts';
 import { adminRoutes } from './routes/admin-routes.ts';
+import { designBodyParser, designRoutes } from './routes/design-routes.ts';
 import { devMailRoutes } from './routes/dev-mail-routes.ts';
 import { healthRoutes } from './routes/health-routes.ts';
 import { printerProfileRoutes } from './routes/printer-profile-routes.ts';
 import { renderRoutes } from './routes/render-routes.ts';
+import { sharedDesignRoutes } from './routes/shared-design-routes.ts';
 
 export interface AppDeps {
   database: Database;
@@ -45,6 +49,8 @@ export function createApp(deps: AppDeps): Express {
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
   // Render routes parse their own (smaller) bodies and need no session.
   app.use('/api/render', renderRoutes());
+  // Saved designs are capped at 256 kB: this parser reads them before the general one below.
+  app.use('/api/designs', designBodyParser());
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRoutes(deps.database, deps.version));
   app.get('/api/app-info', (_req, res) => {
@@ -55,6 +61,9 @@ export function createApp(deps: AppDeps): Express {
   const db = deps.database.db;
   app.use('/api/account', accountRoutes(createAccountUseCases(createAccountRepository(db))));
   app.use('/api/printer-profiles', printerProfileRoutes(createPrinterProfileUseCases(createPrinterProfileRepository(db))));
+  const designLibrary = createDesignLibrary(createDesignRepository(db));
+  app.use('/api/designs', designRoutes(designLibrary));
+  app.use('/api/shared', sharedDesignRoutes(designLibrary));
   app.use('/api/admin', adminRoutes(createAdminUseCases(deps.auth, createUserDirectory(db))));
   if (deps.mailCapture) app.use('/api/dev/mail', devMailRoutes(deps.mailCapture));
   app.use('/api', apiNotFound);

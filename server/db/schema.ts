@@ -1,5 +1,7 @@
 import { sql } from 'drizzle-orm';
-import { boolean, doublePrecision, index, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, unique, uniqueIndex } from 'drizzle-orm/pg-core';
+import type { Design } from '../../shared/design/design-schema.ts';
+import type { DesignSummary } from '../../shared/library/library-schemas.ts';
 
 /**
  * Tables behind sign-in, in the shape better-auth (with its admin plugin) reads and writes.
@@ -98,4 +100,44 @@ export const printerProfiles = pgTable(
   ],
 );
 
-export const schema = { users, sessions, accounts, verifications, printerProfiles };
+/**
+ * A maker's saved designs. The document itself lives in design_versions; current_version names
+ * the newest one. share_token is set while the design is shared by link, and cleared to revoke it.
+ */
+export const designs = pgTable(
+  'designs',
+  {
+    id: text('id').primaryKey(),
+    ownerId: text('owner_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    tags: text('tags').array().notNull().default(sql`'{}'::text[]`),
+    shareToken: text('share_token').unique(),
+    lastPrintedAt: timestamp('last_printed_at', { withTimezone: true }),
+    currentVersion: integer('current_version').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [index('designs_owner_id_idx').on(table.ownerId)],
+);
+
+/** Every saved state of a design, numbered 1, 2, 3... per design; never edited once written. */
+export const designVersions = pgTable(
+  'design_versions',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    number: integer('number').notNull(),
+    /** The validated design JSON (defaults filled in). */
+    document: jsonb('document').$type<Design>().notNull(),
+    summary: jsonb('summary').$type<DesignSummary>().notNull(),
+    note: text('note'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [unique('design_versions_design_number_unique').on(table.designId, table.number)],
+);
+
+export const schema = { users, sessions, accounts, verifications, printerProfiles, designs, designVersions };
