@@ -33,6 +33,9 @@ export function Layout() {
             Canwright
           </Link>
           <nav aria-label="Main" className="flex flex-wrap items-center gap-1">
+            <NavLink to="/design" className={navClass}>
+              Design
+            </NavLink>
             <NavLink to="/printer" className={navClass}>
               Printer
             </NavLink>

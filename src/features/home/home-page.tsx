@@ -23,13 +23,16 @@ export function HomePage() {
         ))}
       </ol>
       <div className="mt-8 flex flex-wrap gap-3">
+        <Link to="/design" className="rounded-md bg-ember-600 px-4 py-2 font-medium text-white hover:bg-ember-700">
+          Start designing
+        </Link>
         {account ? (
-          <Link to="/account" className="rounded-md bg-ember-600 px-4 py-2 font-medium text-white hover:bg-ember-700">
+          <Link to="/account" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
             Go to your account
           </Link>
         ) : (
           <>
-            <Link to="/sign-up" className="rounded-md bg-ember-600 px-4 py-2 font-medium text-white hover:bg-ember-700">
+            <Link to="/sign-up" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
               Create an account
             </Link>
             <Link to="/sign-in" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">

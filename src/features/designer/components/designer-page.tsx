@@ -1,0 +1,159 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { FormProvider, useForm, useWatch } from 'react-hook-form';
+import { Link } from 'react-router';
+import { designSchema, type Design, type DesignInput } from '../../../../shared/design/design-schema.ts';
+import { layoutDocument, type Finding } from '../../../../shared/layout/index.ts';
+import { Page } from '../../../components/page.tsx';
+import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
+import { currentDocument, draftStore, useDraft } from '../draft-store.ts';
+import { examples } from '../examples.ts';
+import { AirflowPanel } from './airflow-panel.tsx';
+import { FindingsList } from './findings-list.tsx';
+import { PartEditor } from './part-editor.tsx';
+import { PrintPanel } from './print-panel.tsx';
+
+type View = 'wall' | 'bottom' | 'assembled';
+
+/** The design screen: edit on the left, see the layout, the checks, the air and the print on the right. */
+export function DesignerPage() {
+  const draft = useDraft();
+  const start = currentDocument(draft) ?? examples[0]!.document;
+  useEffect(() => {
+    if (!draftStore.get()) draftStore.start(start);
+  }, [start]);
+
+  const form = useForm<DesignInput, unknown, Design>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: start });
+  const values = useWatch({ control: form.control }) as DesignInput;
+  const result = useMemo(() => layoutDocument(values), [values]);
+  const units = values.units ?? 'in';
+  const [partIndex, setPartIndex] = useState(0);
+  const [view, setView] = useState<View>('wall');
+  const [finding, setFinding] = useState<Finding>();
+
+  // Every valid change becomes an undo step (debounced so typing is one step).
+  const timer = useRef<ReturnType<typeof setTimeout>>(undefined);
+  useEffect(() => {
+    clearTimeout(timer.current);
+    if (result.ok) timer.current = setTimeout(() => draftStore.record(structuredClone(values)), 300);
+    return () => clearTimeout(timer.current);
+  }, [values, result.ok]);
+
+  const restore = (move: () => void) => {
+    move();
+    const doc = currentDocument(draftStore.get());
+    if (doc) form.reset(doc);
+  };
+  const replace = (next: Design) => {
+    form.reset(next as DesignInput);
+    draftStore.record(next as DesignInput);
+  };
+
+  const parts = values.parts ?? [];
+  const part = parts[Math.min(partIndex, parts.length - 1)];
+  const layout = result.ok ? result.layout : undefined;
+  const pieces = layout?.pieces.filter((p) => p.partId === part?.id) ?? [];
+  const piece = pieces.find((p) => (view === 'bottom' ? p.kind === 'disc' : p.kind === 'wrap-strip')) ?? pieces[0];
+
+  return (
+    <Page title="Design a stove" width="wide">
+      <FormProvider {...form}>
+        <div className="mb-4 flex flex-wrap items-end gap-3">
+          <label className="flex w-full min-w-0 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-auto sm:min-w-64 sm:flex-1">
+            Design name
+            <input {...form.register('name')} className="min-h-10 rounded-md border border-rule bg-white px-3 text-base text-ink" />
+          </label>
+          <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
+            Units
+            <select {...form.register('units')} className="min-h-10 rounded-md border border-rule bg-white px-2 text-sm text-ink">
+              <option value="in">Inches</option>
+              <option value="mm">Millimetres</option>
+            </select>
+          </label>
+          <div className="flex gap-1">
+            <button type="button" onClick={() => restore(draftStore.undo)} disabled={!draft || draft.index === 0} className="min-h-10 rounded-md border border-rule bg-white px-3 text-sm disabled:opacity-50">
+              Undo
+            </button>
+            <button type="button" onClick={() => restore(draftStore.redo)} disabled={!draft || draft.index >= draft.history.length - 1} className="min-h-10 rounded-md border border-rule bg-white px-3 text-sm disabled:opacity-50">
+              Redo
+            </button>
+          </div>
+          <label className="flex w-full min-w-0 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-72">
+            Start again from an example
+            <select value="" onChange={(e) => { const ex = examples.find((x) => x.id === e.target.value); if (ex) replace(designSchema.parse(ex.document)); }} className="min-h-10 w-full rounded-md border border-rule bg-white px-2 text-sm text-ink">
+              <option value="">Choose…</option>
+              {examples.map((ex) => (
+                <option key={ex.id} value={ex.id}>
+                  {ex.document.name}
+                </option>
+              ))}
+            </select>
+          </label>
+        </div>
+
+        <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.1fr)]">
+          <div className="flex flex-col gap-3">
+            <div role="tablist" aria-label="Parts" className="flex flex-wrap gap-1">
+              {parts.map((p, i) => (
+                <button key={p.id} role="tab" type="button" aria-selected={i === partIndex} onClick={() => setPartIndex(i)} className={`rounded-md px-3 py-2 text-sm ${i === partIndex ? 'bg-ember-600 text-white' : 'border border-rule bg-white'}`}>
+                  {p.name ?? p.id}
+                </button>
+              ))}
+            </div>
+            {part && <PartEditor key={`${partIndex}-${part.id}`} partIndex={Math.min(partIndex, parts.length - 1)} units={units} />}
+            {!result.ok && (
+              <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
+                <p className="font-medium">Some values need fixing before the layout updates:</p>
+                <ul className="mt-1 list-disc pl-5">
+                  {result.problems.slice(0, 8).map((p) => (
+                    <li key={p.path}>
+                      {p.path}: {p.message}
+                    </li>
+                  ))}
+                </ul>
+              </div>
+            )}
+          </div>
+
+          <div className="flex flex-col gap-5">
+            <section aria-label="Preview" className="flex flex-col gap-2">
+              <div role="tablist" aria-label="Preview view" className="flex gap-1">
+                {(['wall', 'bottom', 'assembled'] as View[]).map((v) => (
+                  <button key={v} role="tab" type="button" aria-selected={view === v} onClick={() => setView(v)} className={`rounded-md px-3 py-1.5 text-sm ${view === v ? 'bg-ink text-white' : 'border border-rule bg-white'}`}>
+                    {v === 'wall' ? 'Wall strip' : v === 'bottom' ? 'Bottom disc' : 'Assembled'}
+                  </button>
+                ))}
+              </div>
+              <div className="h-80 overflow-hidden rounded-lg border border-rule bg-white sm:h-96">
+                {layout && piece ? (
+                  <LayoutPreview layout={layout} units={units} view={view} pieceId={piece.id} highlight={finding ? new Set(finding.holeIds) : undefined} />
+                ) : (
+                  <p className="p-4 text-sm text-ink-soft">Nothing to show for this part in this view yet.</p>
+                )}
+              </div>
+            </section>
+            {layout && (
+              <>
+                <section aria-labelledby="findings-heading" className="flex flex-col gap-2">
+                  <h2 id="findings-heading" className="font-semibold">
+                    Checks
+                  </h2>
+                  <FindingsList findings={layout.findings} selected={finding} onSelect={setFinding} />
+                </section>
+                {result.ok && <AirflowPanel design={designSchema.parse(values)} layout={layout} units={units} onTargetChange={(ratio) => form.setValue('airflow.targetRatio', ratio)} onApply={replace} />}
+                <PrintPanel design={values} />
+              </>
+            )}
+            <p className="text-sm text-ink-soft">
+              Your design is kept in this browser.{' '}
+              <Link to="/sign-in?next=/design" className="text-ember-700 underline">
+                Sign in
+              </Link>{' '}
+              to save it in your library.
+            </p>
+          </div>
+        </div>
+      </FormProvider>
+    </Page>
+  );
+}

@@ -1,0 +1,78 @@
+import { readFileSync } from 'node:fs';
+import { PDFDocument } from 'pdf-lib';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { artifactPath, browserAvailability, launchBrowser } from '../helpers/browser.ts';
+import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+
+const { skip } = browserAvailability();
+const PT_PER_MM = 72 / 25.4;
+
+describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
+  let server: TestServer;
+  let browser: BrowserContext;
+  let page: Page;
+
+  beforeAll(async () => {
+    server = await startTestServer({ clientDir });
+    browser = await launchBrowser();
+    page = await browser.newPage();
+    page.setDefaultTimeout(20_000);
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  it('starts from the landing page without an account and sees the layout and its checks', async () => {
+    await page.goto(server.url);
+    await page.getByRole('link', { name: 'Start designing' }).click();
+    await page.getByRole('heading', { name: 'Design a stove' }).waitFor();
+    await page.getByRole('list', { name: 'Findings' }).or(page.getByText('No findings')).first().waitFor();
+    expect(await page.getByLabel('Design name').inputValue()).toBe('Alder Street pint-can stove');
+    await page.screenshot({ path: artifactPath('design-1280.png'), fullPage: true });
+  });
+
+  it('flags jets spread too far apart, and undo takes the change back', async () => {
+    const jets = page.getByRole('group', { name: 'Secondary jets' });
+    await jets.getByLabel('Holes (positions)').fill('9');
+    await page.getByText(/Jets of "jets" are up to/).waitFor();
+    await page.waitForTimeout(400); // the edit becomes an undo step after 300 ms
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => jets.getByLabel('Holes (positions)').inputValue()).toBe('16');
+    await expect.poll(() => page.getByText(/Jets of "jets" are up to/).count()).toBe(0);
+  });
+
+  it('keeps the unsaved design through a reload', async () => {
+    await page.getByLabel('Design name').fill('Rowan’s first stove');
+    await page.waitForTimeout(500);
+    await page.reload();
+    await page.getByRole('heading', { name: 'Design a stove' }).waitFor();
+    expect(await page.getByLabel('Design name').inputValue()).toBe('Rowan’s first stove');
+  });
+
+  it('downloads the PDF kit: a valid PDF whose pages are Letter size (ANSI: 8.5 x 11 in)', async () => {
+    const downloading = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Download PDF kit' }).click();
+    const download = await downloading;
+    const path = artifactPath('visitor-kit.pdf');
+    await download.saveAs(path);
+    const doc = await PDFDocument.load(readFileSync(path));
+    expect(doc.getPageCount()).toBeGreaterThan(0);
+    for (const p of doc.getPages()) {
+      expect(p.getWidth()).toBeCloseTo(215.9 * PT_PER_MM, 1);
+      expect(p.getHeight()).toBeCloseTo(279.4 * PT_PER_MM, 1);
+    }
+  });
+
+  it('works on a phone screen without sideways scrolling', async () => {
+    const phone = await browser.newPage();
+    await phone.setViewportSize({ width: 390, height: 844 });
+    await phone.goto(`${server.url}/design`);
+    await phone.getByRole('heading', { name: 'Design a stove' }).waitFor();
+    const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await phone.screenshot({ path: artifactPath('design-390.png'), fullPage: true });
+    await phone.close();
+  });
+});
