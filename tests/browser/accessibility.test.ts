@@ -1,0 +1,70 @@
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { seriousViolations } from '../helpers/axe.ts';
+import { browserAvailability, launchBrowser } from '../helpers/browser.ts';
+import { createUser } from '../helpers/factories.ts';
+import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+
+const { skip } = browserAvailability();
+
+/** axe-core (WCAG 2.1 A/AA rules) finds no serious or critical problem on the main pages. */
+describe.skipIf(skip)('accessibility of the main pages', () => {
+  let server: TestServer;
+  let browser: BrowserContext;
+  let page: Page;
+
+  beforeAll(async () => {
+    server = await startTestServer({ clientDir });
+    browser = await launchBrowser();
+    page = await browser.newPage();
+    page.setDefaultTimeout(20_000);
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  const pages: [string, string, string][] = [
+    ['landing', '/', 'Canwright'],
+    ['sign in', '/sign-in', 'Sign in'],
+    ['sign up', '/sign-up', 'Create your account'],
+    ['design', '/design', 'Design a stove'],
+    ['printer', '/printer', 'Printer calibration'],
+  ];
+
+  it.each(pages)('%s page (%s)', async (_name, path, heading) => {
+    await page.goto(server.url + path);
+    await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
+    await page.waitForTimeout(300);
+    const violations = await seriousViolations(page);
+    expect(violations, JSON.stringify(violations, null, 1)).toEqual([]);
+  });
+
+  it('account page, signed in', async () => {
+    const user = await createUser(server);
+    await page.goto(`${server.url}/sign-in`);
+    await page.getByLabel('E-mail').fill(user.email);
+    await page.getByLabel('Password').fill(user.password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Your account' }).waitFor();
+    expect(await seriousViolations(page)).toEqual([]);
+  });
+
+  it('every control on the design page is reachable with the Tab key', async () => {
+    await page.goto(`${server.url}/design`);
+    await page.getByRole('heading', { name: 'Design a stove' }).waitFor();
+    const controls = await page.evaluate(() => document.querySelectorAll('main button:not([disabled]), main input, main select, main a[href], main [tabindex="0"]').length);
+    const reached = new Set<string>();
+    for (let i = 0; i < controls + 40; i++) {
+      await page.keyboard.press('Tab');
+      const key = await page.evaluate(() => {
+        const el = document.activeElement as HTMLElement | null;
+        if (!el || !el.closest('main')) return null;
+        const all = [...document.querySelectorAll('main *')];
+        return String(all.indexOf(el));
+      });
+      if (key) reached.add(key);
+    }
+    expect(reached.size).toBeGreaterThanOrEqual(controls);
+  });
+});
