@@ -24,6 +24,7 @@ interface PreparedKit {
   design: Design;
   layout: Layout;
   plan: KitPlan;
+  print: PrintOptions;
 }
 
 /** Validates the design, lays it out and imposes it; bad input becomes a 400/422 with reasons. */
@@ -41,7 +42,7 @@ export function prepareKit(input: RenderRequest, today = new Date()): PreparedKi
       date: today.toISOString().slice(0, 10),
       printer: request.printer ? printerScale(request.printer) : undefined,
     });
-    return { design, layout, plan };
+    return { design, layout, plan, print: request.print };
   } catch (error) {
     // The sheet cap and other imposition limits are the request's fault, not the server's.
     if (error instanceof ImpositionError) throw new AppError(422, 'DOES_NOT_FIT', error.message);
@@ -50,9 +51,12 @@ export function prepareKit(input: RenderRequest, today = new Date()): PreparedKi
 }
 
 export async function renderKitPdf(input: RenderRequest, today?: Date): Promise<{ bytes: Uint8Array; sheets: number; fileName: string }> {
-  const { design, plan } = prepareKit(input, today);
+  const { design, plan, print } = prepareKit(input, today);
   const pdf = await createPdfDocument({ title: `${design.name}: drilling templates`, subject: 'Canwright kit', creationDate: today });
   plan.imposition.sheets.forEach((sheet, i) => plan.drawSheet(i, pdf.addSheet(sheet.widthMm, sheet.heightMm, plan.transform)));
+  // The build sheet goes last, portrait on the same paper, so sheet n of the kit stays page n.
+  const page = sheetSize(paperSizes[print.paper], 'portrait');
+  plan.drawBuildSheet(pdf.addSheet(page.widthMm, page.heightMm), { widthMm: page.widthMm, marginMm: print.marginMm });
   return { bytes: await pdf.save(), sheets: plan.imposition.sheets.length, fileName: `${fileStem(design.name)}-kit.pdf` };
 }
 

@@ -1,5 +1,6 @@
 import type { DrawingContext, TextStyle } from '../drawing/drawing-context.ts';
 import type { Hole } from '../layout/layout-types.ts';
+import { wrapText } from './draw-build-sheet.ts';
 import { describeDrill, type KitText } from './kit-text.ts';
 import { drawCheckSquares, drawRuler } from './draw-ruler.ts';
 import { strokes, type } from './draw-style.ts';
@@ -51,24 +52,9 @@ export function drawFurniture(ctx: DrawingContext, sheet: Sheet, sheetCount: num
   const n = f.notes;
   ctx.text(n.x, n.y + 2.9, text.printNote, { ...type.label, weight: 'bold' });
   // The safety note is never cut short: it wraps onto a second line.
-  wrap(text.safetyNote, n.width, type.tiny.sizeMm)
+  wrapText(text.safetyNote, n.width, type.tiny.sizeMm)
     .slice(0, 2)
     .forEach((line, i) => ctx.text(n.x, n.y + 6.3 + i * 3.1, line, type.tiny));
-}
-
-/** Splits text at spaces into lines that fit a width (at about 0.55 em a character). */
-function wrap(text: string, widthMm: number, sizeMm: number): string[] {
-  const max = Math.floor(widthMm / (sizeMm * 0.55));
-  const lines: string[] = [];
-  let line = '';
-  for (const word of text.split(' ')) {
-    if (line && line.length + 1 + word.length > max) {
-      lines.push(line);
-      line = word;
-    } else line = line ? `${line} ${word}` : word;
-  }
-  if (line) lines.push(line);
-  return lines;
 }
 
 /** Cuts text that would run past a box (at about 0.55 em a character) and marks the cut. */

@@ -2,6 +2,7 @@ import type { Design } from '../design/design-schema.ts';
 import type { DrawingContext } from '../drawing/drawing-context.ts';
 import { allDrills, commonDrillSets, resolveDrillSet, suggestPilot } from '../drills/index.ts';
 import type { Layout } from '../layout/layout-types.ts';
+import { drawBuildSheet } from './draw-build-sheet.ts';
 import { drawKitSheet } from './draw-kit.ts';
 import type { KitInfo } from './draw-furniture.ts';
 import { imposePieces } from './impose.ts';
@@ -21,6 +22,8 @@ export interface KitPlan {
   /** The page transform that pre-compensates the printer (identity without a profile). */
   transform: { scaleX: number; scaleY: number };
   drawSheet(index: number, ctx: DrawingContext): void;
+  /** The build sheet (materials, holes, order of work, safety), printed after the templates. */
+  drawBuildSheet(ctx: DrawingContext, page: { widthMm: number; marginMm: number }): void;
 }
 
 /**
@@ -39,6 +42,9 @@ export function planKit(design: Design, layout: Layout, options: PrintOptions, m
       const sheet = imposition.sheets[index];
       if (!sheet) throw new RangeError(`No sheet ${index + 1} in this kit`);
       drawKitSheet(ctx, sheet, imposition, layout, info, text);
+    },
+    drawBuildSheet(ctx, page) {
+      drawBuildSheet(ctx, design, layout, info.pilots, text, page);
     },
   };
 }

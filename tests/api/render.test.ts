@@ -27,7 +27,8 @@ describe('POST /api/render/pdf', () => {
     const bytes = new Uint8Array(await response.arrayBuffer());
     expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-');
     const doc = await PDFDocument.load(bytes);
-    expect(doc.getPageCount()).toBe(Number(response.headers.get('x-sheet-count')));
+    // The template sheets, then the build sheet.
+    expect(doc.getPageCount()).toBe(Number(response.headers.get('x-sheet-count')) + 1);
     for (const page of doc.getPages()) {
       expect(page.getMediaBox().width).toBeCloseTo(210 * PT_PER_MM, 2);
       expect(page.getMediaBox().height).toBeCloseTo(297 * PT_PER_MM, 2);
