@@ -6,13 +6,13 @@ export function createAccountRepository(db: Db) {
   return {
     async findById(id: string) {
       const [row] = await db
-        .select({ id: users.id, name: users.name, email: users.email, emailVerified: users.emailVerified, role: users.role, units: users.units })
+        .select({ id: users.id, name: users.name, email: users.email, emailVerified: users.emailVerified, role: users.role, units: users.units, defaultPaper: users.defaultPaper, drillSetIds: users.drillSetIds })
         .from(users)
         .where(eq(users.id, id));
       return row;
     },
-    async setUnits(id: string, units: string) {
-      await db.update(users).set({ units, updatedAt: new Date() }).where(eq(users.id, id));
+    async setPreferences(id: string, preferences: { units?: string; defaultPaper?: string; drillSetIds?: string[] }) {
+      await db.update(users).set({ ...preferences, updatedAt: new Date() }).where(eq(users.id, id));
     },
   };
 }

@@ -1,11 +1,13 @@
 import { accountSchema, type Account } from '../../shared/account/account.ts';
-import { unitSystemSchema, type Preferences } from '../../shared/account/preferences.ts';
+import { paperPreferenceSchema, unitSystemSchema, type Preferences } from '../../shared/account/preferences.ts';
+import { findDrill } from '../../shared/drills/index.ts';
+import { AppError } from '../http/app-error.ts';
 import { roleSchema } from '../../shared/account/roles.ts';
 import { notFound } from '../http/app-error.ts';
 import type { AccountRepository } from './account-repository.ts';
 
 // Values written outside the app (older rows, manual SQL) fall back to safe defaults.
-const storedAccountSchema = accountSchema.extend({ role: roleSchema.catch('maker'), units: unitSystemSchema.catch('in') });
+const storedAccountSchema = accountSchema.extend({ role: roleSchema.catch('maker'), units: unitSystemSchema.catch('in'), defaultPaper: paperPreferenceSchema.catch('letter') });
 
 export function createAccountUseCases(accounts: AccountRepository) {
   async function getAccount(userId: string): Promise<Account> {
@@ -17,7 +19,9 @@ export function createAccountUseCases(accounts: AccountRepository) {
   return {
     getAccount,
     async updatePreferences(userId: string, preferences: Preferences): Promise<Account> {
-      await accounts.setUnits(userId, preferences.units);
+      const unknown = preferences.drillSetIds?.find((id) => !findDrill(id));
+      if (unknown) throw new AppError(400, 'INVALID_INPUT', 'Some fields are not valid.', { fields: [{ path: 'drillSetIds', message: `Unknown drill "${unknown}"` }] });
+      await accounts.setPreferences(userId, { ...preferences, drillSetIds: preferences.drillSetIds ? [...new Set(preferences.drillSetIds)] : undefined });
       return getAccount(userId);
     },
   };

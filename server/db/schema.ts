@@ -21,6 +21,9 @@ export const users = pgTable('users', {
   banReason: text('ban_reason'),
   banExpires: timestamp('ban_expires', { withTimezone: true }),
   units: text('units').notNull().default('in'),
+  defaultPaper: text('default_paper').notNull().default('letter'),
+  /** The maker's own drills (drill ids); empty means "the usual drills of my units". */
+  drillSetIds: text('drill_set_ids').array().notNull().default(sql`'{}'::text[]`),
 });
 
 export const sessions = pgTable(

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { unitSystemSchema } from './preferences.ts';
+import { paperPreferenceSchema, unitSystemSchema } from './preferences.ts';
 import { roleSchema } from './roles.ts';
 
 /** The signed-in user as the API returns it (GET /api/account). */
@@ -10,11 +10,13 @@ export const accountSchema = z.object({
   emailVerified: z.boolean(),
   role: roleSchema,
   units: unitSystemSchema,
+  defaultPaper: paperPreferenceSchema,
+  drillSetIds: z.array(z.string()),
 });
 export type Account = z.infer<typeof accountSchema>;
 
 /** A row of the admin users table (GET /api/admin/users). */
-export const adminUserSchema = accountSchema.omit({ units: true }).extend({
+export const adminUserSchema = accountSchema.omit({ units: true, defaultPaper: true, drillSetIds: true }).extend({
   disabled: z.boolean(),
   createdAt: z.string(),
 });

@@ -27,6 +27,19 @@ describe('/api/account', () => {
     expect((await http.get('/api/account')).body.units).toBe('mm');
   });
 
+  it('keeps the default paper and the maker\'s own drill set', async () => {
+    const user = await createUser(server);
+    const http = await signedInClient(server, user);
+    expect((await http.get('/api/account')).body).toMatchObject({ defaultPaper: 'letter', drillSetIds: [] });
+    const changed = await http.patch('/api/account/preferences', { defaultPaper: 'a4', drillSetIds: ['frac:3/16', 'frac:1/4', 'frac:1/4'] });
+    expect(changed.status).toBe(200);
+    expect(changed.body).toMatchObject({ defaultPaper: 'a4', drillSetIds: ['frac:3/16', 'frac:1/4'], units: 'in' });
+    const unknown = await http.patch('/api/account/preferences', { drillSetIds: ['frac:1/3'] });
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.error.details.fields[0].path).toBe('drillSetIds');
+    expect((await http.patch('/api/account/preferences', {})).status).toBe(400);
+  });
+
   it('answers 400 with the field path for a bad preference', async () => {
     const user = await createUser(server);
     const http = await signedInClient(server, user);

@@ -3,6 +3,8 @@ import { Page } from '../../../components/page.tsx';
 import { useAccount } from '../api/get-account.ts';
 import { ChangePasswordForm } from './change-password-form.tsx';
 import { UnitsPreference } from './units-preference.tsx';
+import { PrintPreferences } from './print-preferences.tsx';
+import { Link } from 'react-router';
 
 export function AccountPage() {
   const { data: account } = useAccount();
@@ -26,6 +28,18 @@ export function AccountPage() {
           </dl>
         </section>
         <UnitsPreference current={account.units} />
+        <PrintPreferences account={account} />
+        <section aria-labelledby="printer-heading" className="rounded-lg border border-rule bg-white p-5">
+          <h2 id="printer-heading" className="text-lg font-semibold">
+            Printer profiles
+          </h2>
+          <p className="mt-2 text-sm">
+            Print the calibration sheet, measure it and keep a profile so kits print true to size.{' '}
+            <Link to="/printer" className="text-ember-700 underline">
+              Calibrate a printer
+            </Link>
+          </p>
+        </section>
         <ChangePasswordForm />
       </div>
     </Page>

@@ -17,7 +17,7 @@ export function PrintPanel({ design }: { design: DesignInput }) {
   const accountDefault = profiles.data?.profiles.find((p) => p.isDefault);
   const browserProfile = account ? null : readBrowserProfile();
   const profile = accountDefault ?? browserProfile ?? undefined;
-  const [print, setPrint] = useState<PrintOptions>({ paper: 'letter', orientation: 'portrait', marginMm: 12.7 });
+  const [print, setPrint] = useState<PrintOptions>({ paper: account?.defaultPaper ?? 'letter', orientation: 'portrait', marginMm: 12.7 });
   const [useProfile, setUseProfile] = useState(true);
   const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string }>();
   const [busy, setBusy] = useState(false);
