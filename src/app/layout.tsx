@@ -41,6 +41,9 @@ export function Layout() {
             </NavLink>
             {account ? (
               <>
+                <NavLink to="/library" className={navClass}>
+                  Library
+                </NavLink>
                 {account.role === 'admin' && (
                   <NavLink to="/admin/users" className={navClass}>
                     Users

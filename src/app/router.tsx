@@ -37,6 +37,29 @@ export const router = createBrowserRouter([
             ),
           })),
       },
+      {
+        path: 'library',
+        lazy: () =>
+          import('../features/library/components/library-page.tsx').then(({ LibraryPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <LibraryPage />
+              </RequireAccount>
+            ),
+          })),
+      },
+      {
+        path: 'library/:id',
+        lazy: () =>
+          import('../features/library/components/design-history-page.tsx').then(({ DesignHistoryPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <DesignHistoryPage />
+              </RequireAccount>
+            ),
+          })),
+      },
+      { path: 'shared/:token', lazy: () => import('../features/shared-design/components/shared-design-page.tsx').then((m) => ({ Component: m.SharedDesignPage })) },
       { path: 'design', lazy: () => import('../features/designer/components/designer-page.tsx').then((m) => ({ Component: m.DesignerPage })) },
       { path: 'printer', lazy: () => import('../features/printer-profiles/components/printer-calibration-page.tsx').then((m) => ({ Component: m.PrinterCalibrationPage })) },
       { path: 'preview-demo', lazy: () => import('../features/preview/components/preview-demo-page.tsx').then((m) => ({ Component: m.PreviewDemoPage })) },

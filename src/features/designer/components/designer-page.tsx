@@ -1,10 +1,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
-import { Link } from 'react-router';
 import { designSchema, type Design, type DesignInput } from '../../../../shared/design/design-schema.ts';
 import { layoutDocument, type Finding } from '../../../../shared/layout/index.ts';
 import { Page } from '../../../components/page.tsx';
+import { SaveBar } from '../../library/components/save-bar.tsx';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
 import { currentDocument, draftStore, useDraft } from '../draft-store.ts';
 import { examples } from '../examples.ts';
@@ -78,6 +78,7 @@ export function DesignerPage() {
               Redo
             </button>
           </div>
+          <SaveBar document={values} />
           <label className="flex w-full min-w-0 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-72">
             Start again from an example
             <select value="" onChange={(e) => { const ex = examples.find((x) => x.id === e.target.value); if (ex) replace(designSchema.parse(ex.document)); }} className="min-h-10 w-full rounded-md border border-rule bg-white px-2 text-sm text-ink">
@@ -141,16 +142,10 @@ export function DesignerPage() {
                   <FindingsList findings={layout.findings} selected={finding} onSelect={setFinding} />
                 </section>
                 {result.ok && <AirflowPanel design={designSchema.parse(values)} layout={layout} units={units} onTargetChange={(ratio) => form.setValue('airflow.targetRatio', ratio)} onApply={replace} />}
-                <PrintPanel design={values} />
+                <PrintPanel design={values} savedId={draft?.savedId} />
               </>
             )}
-            <p className="text-sm text-ink-soft">
-              Your design is kept in this browser.{' '}
-              <Link to="/sign-in?next=/design" className="text-ember-700 underline">
-                Sign in
-              </Link>{' '}
-              to save it in your library.
-            </p>
+            <p className="text-sm text-ink-soft">Your design is kept in this browser as you work; the save bar above keeps it in your library.</p>
           </div>
         </div>
       </FormProvider>

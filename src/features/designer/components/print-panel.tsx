@@ -8,10 +8,12 @@ import { safetyLine } from '../../../components/safety-note.tsx';
 import { useAccount } from '../../account/api/get-account.ts';
 import { usePrinterProfiles } from '../../printer-profiles/api/get-printer-profiles.ts';
 import { readBrowserProfile } from '../../printer-profiles/browser-profile.ts';
+import { useMarkPrinted } from '../../library/api/mark-printed.ts';
 import { downloadKit, type KitFormat } from '../api/download-kit.ts';
 
 /** Paper, printer and the three downloads: the PDF kit, SVG sheets and the hole table. */
-export function PrintPanel({ design }: { design: DesignInput }) {
+/** `savedId`: the library design this kit comes from, if any (its "last printed" is updated). */
+export function PrintPanel({ design, savedId }: { design: DesignInput; savedId?: string }) {
   const { data: account } = useAccount();
   const profiles = usePrinterProfiles(Boolean(account));
   const accountDefault = profiles.data?.profiles.find((p) => p.isDefault);
@@ -21,6 +23,7 @@ export function PrintPanel({ design }: { design: DesignInput }) {
   const [useProfile, setUseProfile] = useState(true);
   const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string }>();
   const [busy, setBusy] = useState(false);
+  const markPrinted = useMarkPrinted();
 
   async function download(format: KitFormat) {
     setBusy(true);
@@ -28,6 +31,8 @@ export function PrintPanel({ design }: { design: DesignInput }) {
     try {
       const printer = useProfile && profile ? { measuredXMm: profile.measuredXMm, measuredYMm: profile.measuredYMm } : undefined;
       const { fileName, sheets } = await downloadKit(format, { design, print, printer });
+      // A saved design remembers when its kit was last printed (the library's column).
+      if (format === 'pdf' && savedId && account) markPrinted.mutate(savedId);
       setStatus({ tone: 'success', text: format === 'csv' ? `Saved ${fileName}.` : `Saved ${fileName} (${sheets} sheet${sheets === 1 ? '' : 's'}).` });
     } catch (error) {
       setStatus({ tone: 'error', text: (error as Error).message });
