@@ -13,12 +13,12 @@ export function PrintPreferences({ account }: { account: Account }) {
   const [setName, setSetName] = useState(account.drillSetIds.length === 0 ? '' : (currentSet?.name ?? 'custom'));
 
   return (
-    <section aria-labelledby="print-prefs-heading" className="rounded-lg border border-rule bg-white p-5">
+    <section aria-labelledby="print-prefs-heading" className="min-w-0 rounded-lg border border-rule bg-white p-5">
       <h2 id="print-prefs-heading" className="text-lg font-semibold">
         Paper and drills
       </h2>
       <div className="mt-3 flex flex-col gap-3">
-        <label className="flex flex-col gap-1 text-sm font-medium">
+        <label className="flex min-w-0 flex-col gap-1 text-sm font-medium">
           My printer's paper
           <select
             value={paper}
@@ -27,7 +27,7 @@ export function PrintPreferences({ account }: { account: Account }) {
               setPaper(value);
               update.mutate({ defaultPaper: value });
             }}
-            className="min-h-10 rounded-md border border-rule bg-white px-2 font-normal"
+            className="min-h-10 w-full min-w-0 rounded-md border border-rule bg-white px-2 font-normal"
           >
             {paperIds.map((id) => (
               <option key={id} value={id}>
@@ -36,7 +36,7 @@ export function PrintPreferences({ account }: { account: Account }) {
             ))}
           </select>
         </label>
-        <label className="flex flex-col gap-1 text-sm font-medium">
+        <label className="flex min-w-0 flex-col gap-1 text-sm font-medium">
           My drills
           <select
             value={setName}
@@ -45,7 +45,7 @@ export function PrintPreferences({ account }: { account: Account }) {
               const chosen = commonDrillSets.find((set) => set.name === e.target.value);
               update.mutate({ drillSetIds: chosen && chosen.drillIds.length < 400 ? chosen.drillIds : [] });
             }}
-            className="min-h-10 rounded-md border border-rule bg-white px-2 font-normal"
+            className="min-h-10 w-full min-w-0 rounded-md border border-rule bg-white px-2 font-normal"
           >
             <option value="">The usual drills of my units</option>
             {commonDrillSets
@@ -58,7 +58,7 @@ export function PrintPreferences({ account }: { account: Account }) {
             {setName === 'custom' && <option value="custom">My own set ({account.drillSetIds.length} drills)</option>}
           </select>
         </label>
-        <p className="text-sm text-ink-soft">Canwright offers these drills first and warns when a design needs one you do not have.</p>
+        <p className="text-sm text-ink-soft">The design screen offers these drills when a design has no drill set of its own; new kits print on this paper.</p>
       </div>
       <div className="mt-2" aria-live="polite">
         {update.isSuccess && <p className="text-sm text-ok">Saved.</p>}

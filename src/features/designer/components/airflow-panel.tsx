@@ -4,6 +4,7 @@ import type { Design } from '../../../../shared/design/design-schema.ts';
 import type { Layout } from '../../../../shared/layout/index.ts';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
 import { Button } from '../../../components/button.tsx';
+import { useAccount } from '../../account/api/get-account.ts';
 import { DrillOptions, drillChoices } from './drill-options.tsx';
 
 const groupNames = { primary: 'Primary air', secondary: 'Secondary air (jets)', intake: 'Shell intake', other: 'Other holes' } as const;
@@ -15,7 +16,8 @@ function area(mm2: number, units: UnitSystem): string {
 
 export function AirflowPanel({ design, layout, units, onTargetChange, onApply }: { design: Design; layout: Layout; units: UnitSystem; onTargetChange(ratio: number): void; onApply(next: Design): void }) {
   const chamber = design.parts.find((p) => p.role === 'burn-chamber');
-  const choices = drillChoices(design.drillSet.drillIds, units);
+  const { data: account } = useAccount();
+  const choices = drillChoices(design.drillSet.drillIds, units, account?.drillSetIds);
   // Start from the drill the primary holes already use, else the one nearest 1/4 in (6.35 mm).
   const current = design.parts.flatMap((p) => [...p.sideRows, ...p.endPatterns]).find((r) => r.group === 'primary')?.drillId;
   const nearestQuarter = [...choices].sort((a, b) => Math.abs(a.diameterMm - 6.35) - Math.abs(b.diameterMm - 6.35))[0]?.id;

@@ -1,6 +1,7 @@
 import { Controller, useFormContext, useWatch } from 'react-hook-form';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
+import { useAccount } from '../../account/api/get-account.ts';
 import { DrillOptions, drillChoices } from './drill-options.tsx';
 import { NumberField, SelectField } from './field.tsx';
 import { LengthInput } from './length-input.tsx';
@@ -11,6 +12,7 @@ export function EndPatternEditor({ partIndex, patternIndex, units, onRemove }: {
   const base = `parts.${partIndex}.endPatterns.${patternIndex}` as const;
   const pattern = useWatch({ control, name: base });
   const drillSet = useWatch({ control, name: 'drillSet.drillIds' }) ?? [];
+  const { data: account } = useAccount();
   const plan = pattern?.rings;
 
   function switchStrategy(strategy: string) {
@@ -29,7 +31,7 @@ export function EndPatternEditor({ partIndex, patternIndex, units, onRemove }: {
         <option value="other">Other</option>
       </SelectField>
       <SelectField label="Drill" {...register(`${base}.drillId`)}>
-        <DrillOptions choices={drillChoices(drillSet, units)} current={pattern?.drillId ?? ''} />
+        <DrillOptions choices={drillChoices(drillSet, units, account?.drillSetIds)} current={pattern?.drillId ?? ''} />
       </SelectField>
       <SelectField label="Rings" value={plan?.strategy} onChange={(e) => switchStrategy(e.target.value)}>
         <option value="divider">Doubling counts (4, 8, 16…)</option>

@@ -1,6 +1,7 @@
 import { Controller, useFormContext, useWatch } from 'react-hook-form';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
+import { useAccount } from '../../account/api/get-account.ts';
 import { DrillOptions, drillChoices } from './drill-options.tsx';
 import { NumberField, SelectField, TextInputField } from './field.tsx';
 import { LengthInput } from './length-input.tsx';
@@ -11,6 +12,7 @@ export function SideRowEditor({ partIndex, rowIndex, units, onRemove }: { partIn
   const base = `parts.${partIndex}.sideRows.${rowIndex}` as const;
   const row = useWatch({ control, name: base });
   const drillSet = useWatch({ control, name: 'drillSet.drillIds' }) ?? [];
+  const { data: account } = useAccount();
   const errors = formState.errors.parts?.[partIndex]?.sideRows?.[rowIndex];
   return (
     <fieldset className="grid grid-cols-2 gap-2 rounded-md border border-rule p-3 sm:grid-cols-4">
@@ -23,7 +25,7 @@ export function SideRowEditor({ partIndex, rowIndex, units, onRemove }: { partIn
         <option value="other">Other</option>
       </SelectField>
       <SelectField label="Drill" {...register(`${base}.drillId`)}>
-        <DrillOptions choices={drillChoices(drillSet, units)} current={row?.drillId ?? ''} />
+        <DrillOptions choices={drillChoices(drillSet, units, account?.drillSetIds)} current={row?.drillId ?? ''} />
       </SelectField>
       <NumberField label="Holes (positions)" min={1} max={720} error={errors?.count?.message} {...register(`${base}.count`, { valueAsNumber: true })} />
       <SelectField label="Height from" {...register(`${base}.height.from`)}>
