@@ -1,9 +1,9 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seriousViolations } from '../helpers/axe.ts';
-import { browserAvailability, launchBrowser } from '../helpers/browser.ts';
+import { browserAvailability, closeAppInBrowser, openAppInBrowser } from '../helpers/browser.ts';
 import { createUser } from '../helpers/factories.ts';
-import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+import type { TestServer } from '../helpers/test-server.ts';
 
 const { skip } = browserAvailability();
 
@@ -14,15 +14,9 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
   let page: Page;
 
   beforeAll(async () => {
-    server = await startTestServer({ clientDir });
-    browser = await launchBrowser();
-    page = await browser.newPage();
-    page.setDefaultTimeout(20_000);
+    ({ server, browser, page } = await openAppInBrowser(20_000));
   });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  afterAll(() => closeAppInBrowser({ server, browser }));
 
   const pages: [string, string, string][] = [
     ['landing', '/', 'Canwright'],

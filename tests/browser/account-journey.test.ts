@@ -1,8 +1,8 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailability, launchBrowser } from '../helpers/browser.ts';
+import { artifactPath, browserAvailability, closeAppInBrowser, launchBrowser, openAppInBrowser } from '../helpers/browser.ts';
 import { buildUser, createUser } from '../helpers/factories.ts';
-import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+import type { TestServer } from '../helpers/test-server.ts';
 
 const { skip } = browserAvailability();
 
@@ -14,15 +14,9 @@ describe.skipIf(skip)('account journey in Chromium', () => {
   const newPassword = 'a-brand-new-password';
 
   beforeAll(async () => {
-    server = await startTestServer({ clientDir });
-    browser = await launchBrowser();
-    page = await browser.newPage();
-    page.setDefaultTimeout(15_000);
+    ({ server, browser, page } = await openAppInBrowser(15_000));
   });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  afterAll(() => closeAppInBrowser({ server, browser }));
 
   /** Opens the local mailbox page and follows the link in the newest mail with this subject. */
   async function followMailLink(subject: RegExp) {

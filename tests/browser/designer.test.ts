@@ -2,8 +2,8 @@ import { readFileSync } from 'node:fs';
 import { PDFDocument } from 'pdf-lib';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailability, launchBrowser } from '../helpers/browser.ts';
-import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+import { artifactPath, browserAvailability, closeAppInBrowser, openAppInBrowser } from '../helpers/browser.ts';
+import type { TestServer } from '../helpers/test-server.ts';
 
 const { skip } = browserAvailability();
 const PT_PER_MM = 72 / 25.4;
@@ -14,15 +14,9 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
   let page: Page;
 
   beforeAll(async () => {
-    server = await startTestServer({ clientDir });
-    browser = await launchBrowser();
-    page = await browser.newPage();
-    page.setDefaultTimeout(20_000);
+    ({ server, browser, page } = await openAppInBrowser(20_000));
   });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  afterAll(() => closeAppInBrowser({ server, browser }));
 
   it('starts from the landing page without an account and sees the layout and its checks', async () => {
     await page.goto(server.url);

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailability, launchBrowser } from '../helpers/browser.ts';
+import { artifactPath, browserAvailability, closeAppInBrowser, launchBrowser, openAppInBrowser } from '../helpers/browser.ts';
 import { createUser, type TestUser } from '../helpers/factories.ts';
-import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+import type { TestServer } from '../helpers/test-server.ts';
 
 const { skip } = browserAvailability();
 // templates/pint-can-stove.json: the example starts as this name, with 16 jets of 3/16 in.
@@ -29,15 +29,9 @@ describe.skipIf(skip)('a maker saves, versions, restores and shares a design', (
   let shareLink = '';
 
   beforeAll(async () => {
-    server = await startTestServer({ clientDir });
-    browser = await launchBrowser();
-    page = await browser.newPage();
-    page.setDefaultTimeout(20_000);
+    ({ server, browser, page } = await openAppInBrowser(20_000));
   });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  afterAll(() => closeAppInBrowser({ server, browser }));
 
   const jets = () => page.getByRole('group', { name: 'Secondary jets' }).getByLabel('Holes (positions)');
   const row = () => page.getByRole('row').filter({ hasText: PINT_NAME });

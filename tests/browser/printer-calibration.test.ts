@@ -1,8 +1,8 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailability, launchBrowser } from '../helpers/browser.ts';
+import { artifactPath, browserAvailability, closeAppInBrowser, launchBrowser, openAppInBrowser } from '../helpers/browser.ts';
 import { createUser } from '../helpers/factories.ts';
-import { clientDir, startTestServer, type TestServer } from '../helpers/test-server.ts';
+import type { TestServer } from '../helpers/test-server.ts';
 
 const { skip } = browserAvailability();
 const storageKey = 'canwright.printerProfile.v1';
@@ -33,15 +33,9 @@ describe.skipIf(skip)('printer calibration in Chromium', () => {
   let page: Page;
 
   beforeAll(async () => {
-    server = await startTestServer({ clientDir });
-    browser = await launchBrowser();
-    page = await browser.newPage();
-    page.setDefaultTimeout(15_000);
+    ({ server, browser, page } = await openAppInBrowser(15_000));
   });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  afterAll(() => closeAppInBrowser({ server, browser }));
 
   describe('as a visitor', () => {
     it('opens from the main navigation', async () => {

@@ -1,8 +1,9 @@
 import { existsSync, mkdirSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { repoRoot } from './processes.ts';
+import { clientDir, startTestServer, type TestServer } from './test-server.ts';
 
 /** Debian's Chromium, or CHROMIUM_PATH. Browser tests never download a browser. */
 export const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -32,4 +33,24 @@ export function artifactPath(name: string): string {
   const dir = join(repoRoot, 'test-results', 'browser');
   mkdirSync(dir, { recursive: true });
   return join(dir, name);
+}
+
+export interface AppInBrowser {
+  server: TestServer;
+  browser: BrowserContext;
+  page: Page;
+}
+
+/** The whole app on a fresh in-memory database, and Chromium with one page open on nothing yet. */
+export async function openAppInBrowser(timeoutMs = 20_000): Promise<AppInBrowser> {
+  const server = await startTestServer({ clientDir });
+  const browser = await launchBrowser();
+  const page = await browser.newPage();
+  page.setDefaultTimeout(timeoutMs);
+  return { server, browser, page };
+}
+
+export async function closeAppInBrowser(app: Partial<AppInBrowser> | undefined): Promise<void> {
+  await app?.browser?.close();
+  await app?.server?.close();
 }
