@@ -46,6 +46,9 @@ export class PdfPageContext implements DrawingContext {
   private lineWidth = -1;
   private dash = '[] 0';
   private readonly circlePaths = new Map<number, string>();
+  /** The stroke of the line path being built, if any; it is stroked before anything else is drawn. */
+  private openLines: Stroke | null = null;
+  private lastStroke: Stroke | null = null;
 
   constructor(
     private readonly fonts: Record<FontWeight, PDFFont>,
@@ -58,8 +61,13 @@ export class PdfPageContext implements DrawingContext {
   }
 
   line(x1: number, y1: number, x2: number, y2: number, stroke: Stroke): void {
-    this.setStroke(stroke);
-    this.append(`${fmt(x1)} ${fmt(y1)} m ${fmt(x2)} ${fmt(y2)} l S\n`);
+    // Runs of lines in one style (ruler ticks, crosshairs) share one path and one S.
+    if (this.openLines !== stroke) {
+      this.flushLines();
+      this.setStroke(stroke);
+      this.openLines = stroke;
+    }
+    this.content.append(`${fmt(x1)} ${fmt(y1)} m ${fmt(x2)} ${fmt(y2)} l\n`);
   }
 
   polyline(points: readonly (readonly [number, number])[], style: ShapeStyle & { closed?: boolean }): void {
@@ -106,7 +114,14 @@ export class PdfPageContext implements DrawingContext {
   }
 
   private append(operators: string): void {
+    this.flushLines();
     this.content.append(operators);
+  }
+
+  private flushLines(): void {
+    if (!this.openLines) return;
+    this.openLines = null;
+    this.content.append('S\n');
   }
 
   /** Colours and widths are set before `path`, which may open a `q` that `after` closes. */
@@ -134,6 +149,9 @@ export class PdfPageContext implements DrawingContext {
   }
 
   private setStroke(stroke: Stroke): void {
+    // Kit styles are shared constants: the same object means the same state.
+    if (stroke === this.lastStroke) return;
+    this.lastStroke = stroke;
     const color = COLORS[stroke.color ?? 'ink'];
     if (color !== this.strokeColor) {
       this.strokeColor = color;
@@ -172,20 +190,34 @@ export function pageMatrix(heightPt: number, scaleX: number, scaleY: number): st
 }
 
 /**
- * Kits print the same short strings again and again (ruler numbers, drill labels); fontkit's
- * glyph lookup is the costly part of text, so each font keeps what it has already encoded.
+ * Kits print the same short strings again and again (ruler numbers, drill labels), and fontkit's
+ * glyph lookup is the costly part of text. Shaping is off (fonts.ts), so a string's glyphs are
+ * exactly its characters' glyphs: each font encodes and measures a character once, and a string
+ * is the concatenation of its characters (which also registers every glyph in the subset).
  */
 const encoded = new WeakMap<PDFFont, Map<string, { hex: string; widthAt1: number }>>();
+
+function lookupChar(font: PDFFont, cache: Map<string, { hex: string; widthAt1: number }>, char: string) {
+  let entry = cache.get(char);
+  if (!entry) {
+    const hex = font.encodeText(char).toString();
+    entry = { hex: hex.slice(1, -1), widthAt1: font.widthOfTextAtSize(char, 1) };
+    cache.set(char, entry);
+  }
+  return entry;
+}
 
 function lookup(font: PDFFont, text: string): { hex: string; widthAt1: number } {
   let cache = encoded.get(font);
   if (!cache) encoded.set(font, (cache = new Map()));
-  let entry = cache.get(text);
-  if (!entry) {
-    entry = { hex: font.encodeText(text).toString(), widthAt1: font.widthOfTextAtSize(text, 1) };
-    cache.set(text, entry);
+  let hex = '';
+  let widthAt1 = 0;
+  for (const char of text) {
+    const entry = lookupChar(font, cache, char);
+    hex += entry.hex;
+    widthAt1 += entry.widthAt1;
   }
-  return entry;
+  return { hex: `<${hex}>`, widthAt1 };
 }
 
 const encodeText = (font: PDFFont, text: string) => lookup(font, text).hex;
