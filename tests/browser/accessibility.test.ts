@@ -2,7 +2,8 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seriousViolations } from '../helpers/axe.ts';
 import { browserAvailability, closeAppInBrowser, openAppInBrowser } from '../helpers/browser.ts';
-import { createUser } from '../helpers/factories.ts';
+import { readFileSync } from 'node:fs';
+import { createUser, signedInClient } from '../helpers/factories.ts';
 import type { TestServer } from '../helpers/test-server.ts';
 
 const { skip } = browserAvailability();
@@ -42,6 +43,29 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'Your account' }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
+  });
+
+  it('library, history and shared pages', async () => {
+    const maker = await createUser(server);
+    const api = await signedInClient(server, maker);
+    const document = JSON.parse(readFileSync(new URL('../../templates/pint-can-stove.json', import.meta.url), 'utf8'));
+    const created = await api.post('/api/designs', { document });
+    const shared = await api.post(`/api/designs/${created.body.id}/share`, {});
+    await page.goto(`${server.url}/sign-in`);
+    await page.getByLabel('E-mail').fill(maker.email);
+    await page.getByLabel('Password').fill(maker.password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Your account' }).waitFor();
+    for (const [path, heading] of [
+      ['/library', 'Your library'],
+      [`/library/${created.body.id}`, document.name],
+      [shared.body.shareUrlPath, document.name],
+    ]) {
+      await page.goto(server.url + path);
+      await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
+      await page.waitForTimeout(300);
+      expect(await seriousViolations(page), path).toEqual([]);
+    }
   });
 
   it('every control on the design page is reachable with the Tab key', async () => {
