@@ -45,6 +45,19 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     expect(await page.getByLabel('Design name').inputValue()).toBe('Rowan’s first stove');
   });
 
+  it('shows the sheets of the kit before printing, drawn (not blank)', async () => {
+    const sheets = page.getByRole('list', { name: 'Sheets of the kit' }).getByRole('img');
+    await expect.poll(() => sheets.count()).toBeGreaterThan(0);
+    const inked = await sheets.first().evaluate((canvas) => {
+      const c = canvas as HTMLCanvasElement;
+      const data = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data;
+      let dark = 0;
+      for (let i = 0; i < data.length; i += 4) if (data[i]! < 128) dark++;
+      return dark;
+    });
+    expect(inked).toBeGreaterThan(100);
+  });
+
   it('downloads the PDF kit: a valid PDF whose pages are Letter size (ANSI: 8.5 x 11 in)', async () => {
     const downloading = page.waitForEvent('download');
     await page.getByRole('button', { name: 'Download PDF kit' }).click();

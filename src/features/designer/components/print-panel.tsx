@@ -10,6 +10,7 @@ import { usePrinterProfiles } from '../../printer-profiles/api/get-printer-profi
 import { readBrowserProfile } from '../../printer-profiles/browser-profile.ts';
 import { useMarkPrinted } from '../../library/api/mark-printed.ts';
 import { downloadKit, type KitFormat } from '../api/download-kit.ts';
+import { SheetPreviews } from './sheet-previews.tsx';
 
 /** Paper, printer and the three downloads: the PDF kit, SVG sheets and the hole table. */
 /** `savedId`: the library design this kit comes from, if any (its "last printed" is updated). */
@@ -42,7 +43,7 @@ export function PrintPanel({ design, savedId }: { design: DesignInput; savedId?:
   }
 
   return (
-    <section aria-labelledby="print-heading" className="flex flex-col gap-3">
+    <section aria-labelledby="print-heading" className="flex min-w-0 flex-col gap-3">
       <h2 id="print-heading" className="font-semibold">
         Print the kit
       </h2>
@@ -65,6 +66,7 @@ export function PrintPanel({ design, savedId }: { design: DesignInput; savedId?:
           </select>
         </label>
       </div>
+      <SheetPreviews design={design} print={print} />
       {profile ? (
         <label className="flex items-center gap-2 text-sm">
           <input type="checkbox" checked={useProfile} onChange={(e) => setUseProfile(e.target.checked)} /> Scale for my printer ({profile.name})
