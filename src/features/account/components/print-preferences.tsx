@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import type { Account } from '../../../../shared/account/account.ts';
 import { commonDrillSets } from '../../../../shared/drills/index.ts';
-import { paperIds, paperSizes } from '../../../../shared/print/paper.ts';
 import { Notice } from '../../../components/notice.tsx';
+import { PaperOptions } from '../../../components/paper-options.tsx';
 import { useUpdatePreferences } from '../api/update-preferences.ts';
 
 /** The paper a maker's printer takes and the drills they own: used for new kits and drill choices. */
@@ -29,11 +29,7 @@ export function PrintPreferences({ account }: { account: Account }) {
             }}
             className="min-h-10 w-full min-w-0 rounded-md border border-rule bg-white px-2 font-normal"
           >
-            {paperIds.map((id) => (
-              <option key={id} value={id}>
-                {paperSizes[id].name}
-              </option>
-            ))}
+            <PaperOptions />
           </select>
         </label>
         <label className="flex min-w-0 flex-col gap-1 text-sm font-medium">

@@ -1,9 +1,10 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
-import { paperIds, paperSizes, type PrintOptions } from '../../../../shared/print/paper.ts';
+import type { PrintOptions } from '../../../../shared/print/paper.ts';
 import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
+import { PaperOptions } from '../../../components/paper-options.tsx';
 import { safetyLine } from '../../../components/safety-note.tsx';
 import { useAccount } from '../../account/api/get-account.ts';
 import { usePrinterProfiles } from '../../printer-profiles/api/get-printer-profiles.ts';
@@ -51,11 +52,7 @@ export function PrintPanel({ design, savedId }: { design: DesignInput; savedId?:
         <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
           Paper
           <select value={print.paper} onChange={(e) => setPrint({ ...print, paper: e.target.value as PrintOptions['paper'] })} className="min-h-9 rounded-md border border-rule bg-white px-2 text-sm text-ink">
-            {paperIds.map((id) => (
-              <option key={id} value={id}>
-                {paperSizes[id].name}
-              </option>
-            ))}
+            <PaperOptions />
           </select>
         </label>
         <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
