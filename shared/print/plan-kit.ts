@@ -2,6 +2,7 @@ import type { Design } from '../design/design-schema.ts';
 import type { DrawingContext } from '../drawing/drawing-context.ts';
 import { allDrills, commonDrillSets, resolveDrillSet, suggestPilot } from '../drills/index.ts';
 import type { Layout } from '../layout/layout-types.ts';
+import { buildSheetContent, type BuildSheetContent } from './build-sheet.ts';
 import { drawBuildSheet } from './draw-build-sheet.ts';
 import { drawKitSheet } from './draw-kit.ts';
 import type { KitInfo } from './draw-furniture.ts';
@@ -22,7 +23,10 @@ export interface KitPlan {
   /** The page transform that pre-compensates the printer (identity without a profile). */
   transform: { scaleX: number; scaleY: number };
   drawSheet(index: number, ctx: DrawingContext): void;
-  /** The build sheet (materials, holes, order of work, safety), printed after the templates. */
+  /** The build sheet's words (materials, holes, order of work, safety), printed after the templates. */
+  buildSheet: BuildSheetContent;
+  /** What each sheet holds, in words: "Outer shell, wall (part 1 of 3)". */
+  sheetContents: string[];
   drawBuildSheet(ctx: DrawingContext, page: { widthMm: number; marginMm: number }): void;
 }
 
@@ -34,17 +38,27 @@ export function planKit(design: Design, layout: Layout, options: PrintOptions, m
   const imposition = imposePieces(layout.pieces, options);
   const info: KitInfo = { designName: design.name, version: meta.version, date: meta.date, pilots: pilotsFor(design, layout) };
   const text = kitText(design.units);
+  const buildSheet = buildSheetContent(design, layout, info.pilots, text);
   return {
     imposition,
     info,
     transform: compensate(meta.printer),
+    buildSheet,
+    sheetContents: imposition.sheets.map((sheet) =>
+      sheet.placements
+        .map((p) => {
+          const name = layout.pieces.find((piece) => piece.id === p.pieceId)?.name ?? p.pieceId;
+          return p.tile ? `${name} (${text.tile(p.tile.number, p.tile.count)})` : name;
+        })
+        .join('; '),
+    ),
     drawSheet(index, ctx) {
       const sheet = imposition.sheets[index];
       if (!sheet) throw new RangeError(`No sheet ${index + 1} in this kit`);
       drawKitSheet(ctx, sheet, imposition, layout, info, text);
     },
     drawBuildSheet(ctx, page) {
-      drawBuildSheet(ctx, design, layout, info.pilots, text, page);
+      drawBuildSheet(ctx, buildSheet, page);
     },
   };
 }

@@ -60,6 +60,7 @@ export const router = createBrowserRouter([
           })),
       },
       { path: 'shared/:token', lazy: () => import('../features/shared-design/components/shared-design-page.tsx').then((m) => ({ Component: m.SharedDesignPage })) },
+      { path: 'design/print', lazy: () => import('../features/print/components/print-page.tsx').then((m) => ({ Component: m.PrintPage })) },
       { path: 'design', lazy: () => import('../features/designer/components/designer-page.tsx').then((m) => ({ Component: m.DesignerPage })) },
       { path: 'printer', lazy: () => import('../features/printer-profiles/components/printer-calibration-page.tsx').then((m) => ({ Component: m.PrinterCalibrationPage })) },
       { path: 'preview-demo', lazy: () => import('../features/preview/components/preview-demo-page.tsx').then((m) => ({ Component: m.PreviewDemoPage })) },

@@ -24,6 +24,7 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     ['sign in', '/sign-in', 'Sign in'],
     ['sign up', '/sign-up', 'Create your account'],
     ['design', '/design', 'Design a stove'],
+    ['print (the draft the design page started)', '/design/print', 'Print the kit'],
     ['printer', '/printer', 'Printer calibration'],
   ];
 
@@ -68,9 +69,13 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     }
   });
 
-  it('every control on the design page is reachable with the Tab key', async () => {
-    await page.goto(`${server.url}/design`);
-    await page.getByRole('heading', { name: 'Design a stove' }).waitFor();
+  it.each([
+    ['design', '/design', 'Design a stove'],
+    ['print', '/design/print', 'Print the kit'],
+  ])('every control on the %s page is reachable with the Tab key', async (_name, path, heading) => {
+    await page.goto(server.url + path);
+    await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
+    await page.waitForTimeout(300);
     const controls = await page.evaluate(() => document.querySelectorAll('main button:not([disabled]), main input, main select, main a[href], main [tabindex="0"]').length);
     const reached = new Set<string>();
     for (let i = 0; i < controls + 40; i++) {

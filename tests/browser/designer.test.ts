@@ -45,7 +45,10 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     expect(await page.getByLabel('Design name').inputValue()).toBe('Rowan’s first stove');
   });
 
-  it('shows the sheets of the kit before printing, drawn (not blank)', async () => {
+  it('opens the print screen and sees every sheet drawn (not blank) and the build sheet', async () => {
+    await page.getByRole('link', { name: 'Print the kit' }).click();
+    await page.getByRole('heading', { name: 'Print the kit' }).waitFor();
+    await page.getByText('Rowan’s first stove', { exact: true }).waitFor(); // the draft, not the example
     const sheets = page.getByRole('list', { name: 'Sheets of the kit' }).getByRole('img');
     await expect.poll(() => sheets.count()).toBeGreaterThan(0);
     const inked = await sheets.first().evaluate((canvas) => {
@@ -56,20 +59,35 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
       return dark;
     });
     expect(inked).toBeGreaterThan(100);
+    const buildSheet = page.getByRole('article', { name: 'Rowan’s first stove: build sheet' });
+    // templates/pint-can-stove.json: 16 jets of 3/16 in, pilot from the 29-piece set (common practice, no source).
+    await buildSheet.getByRole('row').filter({ hasText: 'Secondary jets' }).filter({ hasText: '3/16 in' }).waitFor();
+    await buildSheet.getByText(/carbon monoxide/).first().waitFor();
+    await page.screenshot({ path: artifactPath('print-1280.png'), fullPage: true });
   });
 
-  it('downloads the PDF kit: a valid PDF whose pages are Letter size (ANSI: 8.5 x 11 in)', async () => {
+  it('downloads the PDF kit: a valid PDF of Letter pages (ANSI: 8.5 x 11 in), one per sheet shown plus the build sheet', async () => {
+    const shown = await page.getByRole('list', { name: 'Sheets of the kit' }).getByRole('img').count();
     const downloading = page.waitForEvent('download');
     await page.getByRole('button', { name: 'Download PDF kit' }).click();
     const download = await downloading;
     const path = artifactPath('visitor-kit.pdf');
     await download.saveAs(path);
     const doc = await PDFDocument.load(readFileSync(path));
-    expect(doc.getPageCount()).toBeGreaterThan(0);
+    expect(doc.getPageCount()).toBe(shown + 1);
     for (const p of doc.getPages()) {
       expect(p.getWidth()).toBeCloseTo(215.9 * PT_PER_MM, 1);
       expect(p.getHeight()).toBeCloseTo(279.4 * PT_PER_MM, 1);
     }
+  });
+
+  it('switches to A4 and downloads sheet 1 as an SVG sized in millimetres (ISO 216: 210 x 297 mm)', async () => {
+    await page.getByRole('combobox', { name: /^Paper/ }).selectOption('a4');
+    const downloading = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Download sheet 1 as SVG' }).click();
+    const svg = readFileSync(await (await downloading).path(), 'utf8');
+    expect(svg).toMatch(/width="210mm"/);
+    expect(svg).toMatch(/height="297mm"/);
   });
 
   it('works on a phone screen without sideways scrolling', async () => {
@@ -80,6 +98,11 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     await phone.screenshot({ path: artifactPath('design-390.png'), fullPage: true });
+    await phone.goto(`${server.url}/design/print`);
+    await phone.getByRole('heading', { name: 'Print the kit' }).waitFor();
+    await phone.getByRole('list', { name: 'Sheets of the kit' }).waitFor();
+    expect(await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+    await phone.screenshot({ path: artifactPath('print-390.png'), fullPage: true });
     await phone.close();
   });
 });

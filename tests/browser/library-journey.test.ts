@@ -123,7 +123,7 @@ describe.skipIf(skip)('a maker saves, versions, restores and shares a design', (
       const guest = await visitor.newPage();
       guest.setDefaultTimeout(20_000);
       await guest.goto(shareLink);
-      await guest.getByRole('heading', { name: PINT_NAME }).waitFor();
+      await guest.getByRole('heading', { name: PINT_NAME, level: 1 }).waitFor();
       const downloading = guest.waitForEvent('download');
       await guest.getByRole('button', { name: 'Download PDF kit' }).click();
       const path = artifactPath('shared-kit.pdf');

@@ -1,9 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
+import { Link } from 'react-router';
 import { designSchema, type Design, type DesignInput } from '../../../../shared/design/design-schema.ts';
 import { layoutDocument, type Finding } from '../../../../shared/layout/index.ts';
 import { Page } from '../../../components/page.tsx';
+import { safetyLine } from '../../../components/safety-note.tsx';
 import { SaveBar } from '../../library/components/save-bar.tsx';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
 import { currentDocument, draftStore, useDraft } from '../draft-store.ts';
@@ -11,7 +13,6 @@ import { examples } from '../examples.ts';
 import { AirflowPanel } from './airflow-panel.tsx';
 import { FindingsList } from './findings-list.tsx';
 import { PartEditor } from './part-editor.tsx';
-import { PrintPanel } from './print-panel.tsx';
 
 type View = 'wall' | 'bottom' | 'assembled';
 
@@ -142,7 +143,19 @@ export function DesignerPage() {
                   <FindingsList findings={layout.findings} selected={finding} onSelect={setFinding} />
                 </section>
                 {result.ok && <AirflowPanel design={designSchema.parse(values)} layout={layout} units={units} onTargetChange={(ratio) => form.setValue('airflow.targetRatio', ratio)} onApply={replace} />}
-                <PrintPanel design={values} savedId={draft?.savedId} />
+                <section aria-labelledby="print-heading" className="flex flex-col gap-2">
+                  <h2 id="print-heading" className="font-semibold">
+                    Print the kit
+                  </h2>
+                  <p className="text-sm text-ink-soft">Choose paper and printer, look over every sheet and the build sheet, then download the PDF kit, an SVG per sheet or the hole table.</p>
+                  <div>
+                    {/* The draft records edits after a pause; the print screen must see the latest. */}
+                    <Link to="/design/print" onClick={() => result.ok && draftStore.record(structuredClone(values))} className="inline-flex min-h-10 items-center rounded-md bg-ember-600 px-4 py-2 text-sm font-medium text-white hover:bg-ember-700">
+                      Print the kit
+                    </Link>
+                  </div>
+                  <p className="rounded-md border border-ember-600/30 bg-ember-50 px-3 py-2 text-sm">{safetyLine}</p>
+                </section>
               </>
             )}
             <p className="text-sm text-ink-soft">Your design is kept in this browser as you work; the save bar above keeps it in your library.</p>

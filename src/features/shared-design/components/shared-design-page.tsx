@@ -5,7 +5,7 @@ import { layoutDocument } from '../../../../shared/layout/index.ts';
 import { Button } from '../../../components/button.tsx';
 import { Page } from '../../../components/page.tsx';
 import { ApiError } from '../../../lib/api-client.ts';
-import { PrintPanel } from '../../designer/components/print-panel.tsx';
+import { PrintWorkspace } from '../../print/components/print-workspace.tsx';
 import { draftStore } from '../../designer/draft-store.ts';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
 import type { PreviewView } from '../../preview/preview-scene.ts';
@@ -64,13 +64,29 @@ export function SharedDesignPage() {
           </div>
         </section>
         <div className="flex flex-col gap-5">
+          {layout && (
+            <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+              {document.parts.map((part) => (
+                <div key={part.id} className="contents">
+                  <dt className="font-medium">{part.name ?? part.role}</dt>
+                  <dd>{part.vessel.name}</dd>
+                </div>
+              ))}
+              <dt className="font-medium">Holes</dt>
+              <dd>{layout.holes.length}</dd>
+              <dt className="font-medium">Primary : secondary</dt>
+              <dd>{layout.airflow.ratio === null ? '–' : `${layout.airflow.ratio.toFixed(1)} : 1`}</dd>
+            </dl>
+          )}
           <div>
             <Button variant="secondary" onClick={() => void openCopy(document)}>
               Open a copy in the designer
             </Button>
           </div>
-          <PrintPanel design={document} />
         </div>
+      </div>
+      <div className="mt-8">
+        <PrintWorkspace design={document} />
       </div>
     </Page>
   );

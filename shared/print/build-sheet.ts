@@ -1,0 +1,67 @@
+import type { Design } from '../design/design-schema.ts';
+import type { Layout } from '../layout/layout-types.ts';
+import { describeDrill, describeLength, type KitText } from './kit-text.ts';
+
+/** The order of work for every hole (common practice, no source). */
+export const ORDER_OF_WORK = [
+  'Check the print: the rulers measure 100 mm and 4 in. If not, print again at 100 % or calibrate the printer.',
+  'Cut out the strips and discs. Tape each strip round its can, its edge level with the can bottom (or rim), starting at the seam; tape the tab over the start.',
+  'Centre-punch every hole through the dot in its crosshair. Take the paper off.',
+  'Clamp the can (a wooden block or dowel inside stops the wall denting). Drill each pilot hole, then the final size.',
+  'Deburr inside and out with a larger bit turned by hand or a file. Wash off oil and burn off any coating outdoors before first use.',
+];
+
+export const SAFETY_NOTES = [
+  'Wear eye protection when drilling and cutting; clamp the work, never hold a can by hand under the drill.',
+  'Cut metal edges are sharp: wear gloves and deburr every hole and edge.',
+  'Burn off paint, lacquer and plastic linings outdoors before the first fire. Never heat galvanized (zinc-coated) metal: its fumes are poisonous.',
+  'Never burn a stove indoors, in a tent or in any closed space: carbon monoxide kills without warning.',
+  'Check fire restrictions and burn bans; keep water near, children and anything flammable clear. Coals stay hot for hours.',
+  'These templates lay out holes; they do not make a fire safe. Follow local codes and regulations.',
+];
+
+export interface BuildSheetHoleGroup {
+  /** The row or pattern the holes come from ("Secondary jets"). */
+  label: string;
+  count: number;
+  /** "3/16 in (4.76 mm)", in the design's units first. */
+  drill: string;
+  pilot?: string;
+}
+
+export interface BuildSheetContent {
+  title: string;
+  materials: { part: string; text: string }[];
+  holes: { part: string; groups: BuildSheetHoleGroup[] }[];
+  orderOfWork: string[];
+  safety: string[];
+}
+
+/**
+ * What the build sheet says: materials, the holes of each part with drill and pilot, the order of
+ * work and the safety notes. The PDF draws it; the print screen shows the same words as a page.
+ */
+export function buildSheetContent(design: Design, layout: Layout, pilots: ReadonlyMap<string, string>, text: Pick<KitText, 'units'>): BuildSheetContent {
+  const partOf = new Map(layout.pieces.map((p) => [p.id, p.partId]));
+  return {
+    title: `${design.name}: build sheet`,
+    materials: design.parts.map((part) => ({
+      part: part.name ?? part.role,
+      text: `${part.vessel.name}, ${describeLength(part.vessel.outerDiameterMm, text)} across, ${describeLength(part.vessel.heightMm, text)} tall`,
+    })),
+    holes: design.parts.flatMap((part) => {
+      const bySource = new Map<string, Layout['holes']>();
+      for (const hole of layout.holes) if (partOf.get(hole.pieceId) === part.id) bySource.set(hole.sourceId, [...(bySource.get(hole.sourceId) ?? []), hole]);
+      if (bySource.size === 0) return [];
+      const sources = [...part.sideRows, ...part.endPatterns];
+      const groups = [...bySource].map(([sourceId, group]): BuildSheetHoleGroup => {
+        const first = group[0]!;
+        const pilot = pilots.get(first.drillId);
+        return { label: sources.find((r) => r.id === sourceId)?.label ?? sourceId, count: group.length, drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
+      });
+      return [{ part: part.name ?? part.role, groups }];
+    }),
+    orderOfWork: ORDER_OF_WORK,
+    safety: SAFETY_NOTES,
+  };
+}

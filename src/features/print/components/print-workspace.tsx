@@ -1,0 +1,114 @@
+import { useMemo, useState } from 'react';
+import type { DesignInput } from '../../../../shared/design/design-schema.ts';
+import type { PrintOptions } from '../../../../shared/print/paper.ts';
+import { Button } from '../../../components/button.tsx';
+import { Notice } from '../../../components/notice.tsx';
+import { PaperOptions } from '../../../components/paper-options.tsx';
+import { safetyLine } from '../../../components/safety-note.tsx';
+import { useAccount } from '../../account/api/get-account.ts';
+import { useMarkPrinted } from '../../library/api/mark-printed.ts';
+import { downloadKit, type KitFormat } from '../api/download-kit.ts';
+import { useKitPlan } from '../use-kit-plan.ts';
+import { BuildSheetView } from './build-sheet-view.tsx';
+import { PrinterChoice, usePrinterChoices } from './printer-choice.tsx';
+import { SheetPreviews } from './sheet-previews.tsx';
+
+const select = 'min-h-10 rounded-md border border-rule bg-white px-2 text-sm text-ink';
+const MARGIN_MM = 12.7; // 1/2 in: inside what common desktop printers can reach (common practice, no source)
+
+/**
+ * Paper, printer, the sheets as they will print, the downloads (PDF kit, SVG per sheet, hole
+ * table), the calibration sheet and the build sheet. `savedId`: the library design the kit comes
+ * from, whose "last printed" a PDF download updates.
+ */
+export function PrintWorkspace({ design, savedId }: { design: DesignInput; savedId?: string }) {
+  const { data: account } = useAccount();
+  const [paper, setPaper] = useState<PrintOptions['paper']>();
+  const [orientation, setOrientation] = useState<PrintOptions['orientation']>('portrait');
+  const chosenPaper = paper ?? account?.defaultPaper ?? 'letter';
+  const print = useMemo((): PrintOptions => ({ paper: chosenPaper, orientation, marginMm: MARGIN_MM }), [chosenPaper, orientation]);
+  const kit = useKitPlan(design, print);
+  const printers = usePrinterChoices();
+  const [printerValue, setPrinterValue] = useState<string>();
+  const printer = printers.choices.find((c) => c.value === (printerValue ?? printers.preferred)) ?? printers.choices.at(-1)!;
+  const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string }>();
+  const [busy, setBusy] = useState(false);
+  const markPrinted = useMarkPrinted();
+
+  async function download(format: KitFormat, sheet?: number) {
+    setBusy(true);
+    setStatus(undefined);
+    try {
+      const correction = printer.profile ? { measuredXMm: printer.profile.measuredXMm, measuredYMm: printer.profile.measuredYMm } : undefined;
+      const { fileName, sheets } = await downloadKit(format, { design, print, printer: correction, sheet });
+      if (format === 'pdf' && savedId && account) markPrinted.mutate(savedId);
+      setStatus({ tone: 'success', text: format === 'pdf' ? `Saved ${fileName} (${sheets} sheet${sheets === 1 ? '' : 's'} and the build sheet).` : `Saved ${fileName}.` });
+    } catch (error) {
+      setStatus({ tone: 'error', text: (error as Error).message });
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <div className="flex min-w-0 flex-col gap-6">
+      <section aria-labelledby="print-setup-heading" className="flex flex-col gap-3">
+        <h2 id="print-setup-heading" className="font-semibold">
+          Paper and printer
+        </h2>
+        <div className="grid gap-3 sm:grid-cols-[1fr_1fr_2fr]">
+          <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
+            Paper
+            <select value={print.paper} onChange={(e) => setPaper(e.target.value as PrintOptions['paper'])} className={select}>
+              <PaperOptions />
+            </select>
+          </label>
+          <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
+            Orientation
+            <select value={orientation} onChange={(e) => setOrientation(e.target.value as PrintOptions['orientation'])} className={select}>
+              <option value="portrait">Portrait</option>
+              <option value="landscape">Landscape</option>
+            </select>
+          </label>
+          <PrinterChoice choices={printers.choices} value={printer.value} onChange={setPrinterValue} />
+        </div>
+        <p className="text-sm">
+          <a href={`/api/render/calibration.pdf?${new URLSearchParams({ paper: print.paper })}`} download="canwright-calibration.pdf" className="text-ember-700 underline">
+            Calibration sheet for this paper (PDF)
+          </a>
+          <span className="text-ink-soft"> — print it first if you have not measured this printer.</span>
+        </p>
+      </section>
+
+      <section aria-labelledby="print-sheets-heading" className="flex min-w-0 flex-col gap-3">
+        <h2 id="print-sheets-heading" className="font-semibold">
+          Sheets
+        </h2>
+        {kit.ok ? (
+          <>
+            <p className="text-sm text-ink-soft">
+              {kit.plan.imposition.sheets.length} template sheet{kit.plan.imposition.sheets.length === 1 ? '' : 's'}, then the build sheet.
+            </p>
+            <SheetPreviews plan={kit.plan} busy={busy} onDownloadSvg={(sheet) => void download('svg', sheet)} />
+          </>
+        ) : (
+          <p className="text-sm text-danger">{kit.problem}</p>
+        )}
+        <div className="flex flex-wrap gap-2">
+          <Button disabled={busy || !kit.ok} onClick={() => void download('pdf')}>
+            Download PDF kit
+          </Button>
+          <Button variant="secondary" disabled={busy} onClick={() => void download('csv')}>
+            Hole table (CSV)
+          </Button>
+        </div>
+        {status && <Notice tone={status.tone}>{status.text}</Notice>}
+        <p className="rounded-md border border-ember-600/30 bg-ember-50 px-3 py-2 text-sm">
+          Print at 100 % / actual size and measure the ruler before drilling. {safetyLine}
+        </p>
+      </section>
+
+      {kit.ok && <BuildSheetView content={kit.plan.buildSheet} />}
+    </div>
+  );
+}
