@@ -194,6 +194,20 @@ describe.skipIf(skip)('printer calibration in Chromium', () => {
       expect(answer.profiles.map((p: { name: string; isDefault: boolean }) => [p.name, p.isDefault])).toEqual([['Office inkjet', true]]);
     });
 
+    it('moves a profile measured in this browser before signing in into the account, and the browser forgets it', async () => {
+      await makerPage.evaluate(([key, value]) => localStorage.setItem(key ?? '', value ?? ''), [storageKey, JSON.stringify({ name: 'Garage inkjet', measuredXMm: 152.25, measuredYMm: 198.6 })]);
+      await makerPage.reload();
+      const offer = makerPage.getByRole('region', { name: /Measured in this browser before you signed in/ });
+      await offer.getByText('Garage inkjet').waitFor();
+      await offer.getByRole('button', { name: 'Keep it with my account' }).click();
+      await item('Garage inkjet').waitFor();
+      await offer.waitFor({ state: 'detached' });
+      expect(await makerPage.evaluate((key) => localStorage.getItem(key), storageKey)).toBeNull();
+      const answer = await makerPage.evaluate(async () => (await fetch('/api/printer-profiles')).json());
+      const moved = answer.profiles.find((p: { name: string }) => p.name === 'Garage inkjet');
+      expect([moved.measuredXMm, moved.measuredYMm]).toEqual([152.25, 198.6]);
+    });
+
     it('shows the saved profiles on a phone screen without sideways scrolling', async () => {
       const phone = await maker.newPage();
       await phone.setViewportSize({ width: 390, height: 844 });

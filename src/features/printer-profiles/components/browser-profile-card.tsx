@@ -26,7 +26,7 @@ export function BrowserProfileCard() {
         <Link to="/sign-in?next=%2Fprinter" className="text-ember-700 underline">
           Sign in
         </Link>{' '}
-        and save it again to keep it with your account.
+        and Canwright offers to keep it with your account.
       </p>
     </div>
   );

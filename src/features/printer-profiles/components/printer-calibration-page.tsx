@@ -5,6 +5,7 @@ import { AccountProfileList } from './account-profile-list.tsx';
 import { BrowserProfileCard } from './browser-profile-card.tsx';
 import { CalibrationSheetStep } from './calibration-sheet-step.tsx';
 import { MeasureForm } from './measure-form.tsx';
+import { MoveBrowserProfile } from './move-browser-profile.tsx';
 import { StepSection } from './step-section.tsx';
 
 /**
@@ -34,7 +35,16 @@ export function PrinterCalibrationPage() {
           title={signedIn ? 'Your printers' : 'Saved in this browser'}
           intro={signedIn ? 'Templates you print are scaled for your default printer.' : undefined}
         >
-          {signedIn === undefined ? <p className="text-sm text-ink-soft">Loading…</p> : signedIn ? <AccountProfileList /> : <BrowserProfileCard />}
+          {signedIn === undefined ? (
+            <p className="text-sm text-ink-soft">Loading…</p>
+          ) : signedIn ? (
+            <div className="flex flex-col gap-4">
+              <MoveBrowserProfile />
+              <AccountProfileList />
+            </div>
+          ) : (
+            <BrowserProfileCard />
+          )}
         </StepSection>
       </div>
     </Page>
