@@ -94,7 +94,7 @@ export function DesignerPage() {
         </div>
 
         <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.1fr)]">
-          <div className="flex min-w-0 flex-col gap-3">
+          <div className="@container flex min-w-0 flex-col gap-3">
             <div role="tablist" aria-label="Parts" className="flex flex-wrap gap-1">
               {parts.map((p, i) => (
                 <button key={p.id} role="tab" type="button" aria-selected={i === partIndex} onClick={() => setPartIndex(i)} className={`rounded-md px-3 py-2 text-sm ${i === partIndex ? 'bg-ember-600 text-white' : 'border border-rule bg-white'}`}>

@@ -22,7 +22,7 @@ export function EndPatternEditor({ partIndex, patternIndex, units, onRemove }: {
   }
 
   return (
-    <fieldset className="grid grid-cols-2 gap-2 rounded-md border border-rule p-3 sm:grid-cols-4">
+    <fieldset className="grid grid-cols-2 gap-2 rounded-md border border-rule p-3 @lg:grid-cols-4">
       <legend className="px-1 text-sm font-medium">{pattern?.label || pattern?.id} (can {pattern?.face ?? 'bottom'})</legend>
       <SelectField label="Air" {...register(`${base}.group`)}>
         <option value="primary">Primary</option>
@@ -60,7 +60,7 @@ export function EndPatternEditor({ partIndex, patternIndex, units, onRemove }: {
       )}
       {plan?.strategy === 'explicit' &&
         plan.rings?.map((_, ring) => (
-          <div key={ring} className="col-span-2 grid grid-cols-3 gap-2 sm:col-span-4">
+          <div key={ring} className="col-span-2 grid grid-cols-3 gap-2 @lg:col-span-4">
             <Controller control={control} name={`${base}.rings.rings.${ring}.radiusMm`} render={({ field }) => <LengthInput label={`Ring ${ring + 1} radius`} units={units} valueMm={field.value} onChange={field.onChange} />} />
             <NumberField label="Holes" min={1} {...register(`${base}.rings.rings.${ring}.count`, { valueAsNumber: true })} />
             <NumberField label="Turn (°)" step="any" {...register(`${base}.rings.rings.${ring}.phaseDeg`, { valueAsNumber: true })} />

@@ -15,7 +15,7 @@ export function SideRowEditor({ partIndex, rowIndex, units, onRemove }: { partIn
   const { data: account } = useAccount();
   const errors = formState.errors.parts?.[partIndex]?.sideRows?.[rowIndex];
   return (
-    <fieldset className="grid grid-cols-2 gap-2 rounded-md border border-rule p-3 sm:grid-cols-4">
+    <fieldset className="grid grid-cols-2 gap-2 rounded-md border border-rule p-3 @lg:grid-cols-4">
       <legend className="px-1 text-sm font-medium">{row?.label || row?.id}</legend>
       <TextInputField label="Name" {...register(`${base}.label`)} />
       <SelectField label="Air" {...register(`${base}.group`)}>

@@ -18,7 +18,7 @@ export function VesselField({ partIndex, units }: { partIndex: number; units: Un
       <p className="text-sm">
         <strong>{vessel.name}</strong> · {vessel.outerDiameterMm.toFixed(1)} × {vessel.heightMm.toFixed(1)} mm
       </p>
-      <div className="grid gap-2 sm:grid-cols-2">
+      <div className="grid gap-2 @md:grid-cols-2">
         <div className="flex flex-col gap-1">
           <label className="text-xs font-medium text-ink-soft" htmlFor={`can-search-${partIndex}`}>
             Find a can (trade code such as 303x406, or a size)
@@ -44,7 +44,7 @@ export function VesselField({ partIndex, units }: { partIndex: number; units: Un
           </select>
         </div>
       </div>
-      <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
+      <div className="grid grid-cols-2 gap-2 @md:grid-cols-3">
         <Controller
           control={control}
           name={`parts.${partIndex}.vessel.outerDiameterMm`}
