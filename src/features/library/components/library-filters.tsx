@@ -1,4 +1,5 @@
-import type { SortState } from './sort-header.tsx';
+import type { SortingState } from '@tanstack/react-table';
+import type { DesignSortColumn } from './library-columns.tsx';
 
 interface LibraryFiltersProps {
   search: string;
@@ -6,24 +7,28 @@ interface LibraryFiltersProps {
   tag: string;
   tags: string[];
   onTag(tag: string): void;
-  sort: SortState;
-  onSort(next: SortState): void;
+  sorting: SortingState;
+  onSorting(next: SortingState): void;
 }
 
-const sortChoices: { value: string; label: string; state: SortState }[] = [
-  { value: 'updated', label: 'Recently updated', state: { sort: 'updated', reversed: false } },
-  { value: 'updated-old', label: 'Least recently updated', state: { sort: 'updated', reversed: true } },
-  { value: 'name', label: 'Name, A to Z', state: { sort: 'name', reversed: false } },
-  { value: 'name-z', label: 'Name, Z to A', state: { sort: 'name', reversed: true } },
-  { value: 'lastPrinted', label: 'Recently printed', state: { sort: 'lastPrinted', reversed: false } },
-  { value: 'lastPrinted-old', label: 'Never or long ago printed', state: { sort: 'lastPrinted', reversed: true } },
+/** Every order the column headers can give, one line each; never-printed designs stay last both ways. */
+const sortChoices: { label: string; id: DesignSortColumn; desc: boolean }[] = [
+  { label: 'Recently updated', id: 'updated', desc: true },
+  { label: 'Least recently updated', id: 'updated', desc: false },
+  { label: 'Name, A to Z', id: 'name', desc: false },
+  { label: 'Name, Z to A', id: 'name', desc: true },
+  { label: 'Recently printed', id: 'lastPrinted', desc: true },
+  { label: 'Least recently printed', id: 'lastPrinted', desc: false },
+  { label: 'Highest version first', id: 'version', desc: true },
+  { label: 'Lowest version first', id: 'version', desc: false },
 ];
 
-const valueOf = (state: SortState) => sortChoices.find((c) => c.state.sort === state.sort && c.state.reversed === state.reversed)?.value ?? 'updated';
+const valueOf = (sort: { id: string; desc: boolean }) => `${sort.id}-${sort.desc ? 'desc' : 'asc'}`;
 const control = 'min-h-10 rounded-md border border-rule bg-white px-3 text-sm text-ink';
 
-/** Search, tag filter and (on a phone, where the sortable header is hidden) a sort menu. */
-export function LibraryFilters({ search, onSearch, tag, tags, onTag, sort, onSort }: LibraryFiltersProps) {
+/** Search, tag filter and (on a phone, where the sortable header is hidden) a sort menu sharing the table's sorting. */
+export function LibraryFilters({ search, onSearch, tag, tags, onTag, sorting, onSorting }: LibraryFiltersProps) {
+  const current = sorting[0];
   return (
     <div className="mb-4 flex flex-wrap items-end gap-3">
       <label className="flex w-full min-w-0 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-auto sm:min-w-64 sm:flex-1">
@@ -43,9 +48,16 @@ export function LibraryFilters({ search, onSearch, tag, tags, onTag, sort, onSor
       </label>
       <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft sm:hidden">
         Sort
-        <select value={valueOf(sort)} onChange={(e) => onSort(sortChoices.find((c) => c.value === e.target.value)?.state ?? sort)} className={control}>
+        <select
+          value={current ? valueOf(current) : ''}
+          onChange={(e) => {
+            const choice = sortChoices.find((c) => valueOf(c) === e.target.value);
+            if (choice) onSorting([{ id: choice.id, desc: choice.desc }]);
+          }}
+          className={control}
+        >
           {sortChoices.map((c) => (
-            <option key={c.value} value={c.value}>
+            <option key={valueOf(c)} value={valueOf(c)}>
               {c.label}
             </option>
           ))}
