@@ -10,10 +10,12 @@ export interface DemoAccount {
   email: string;
   password: string;
   role: Role;
+  /** Gets the demo designs in its library when the account is first made. */
+  withDemoLibrary?: boolean;
 }
 
 export const demoAccounts: DemoAccount[] = [
-  { name: 'Robin Maker', email: 'maker@alder-street.example', password: 'demo-maker-stove', role: 'maker' },
+  { name: 'Robin Maker', email: 'maker@alder-street.example', password: 'demo-maker-stove', role: 'maker', withDemoLibrary: true },
   { name: 'Jo Instructor', email: 'instructor@alder-street.example', password: 'demo-instructor-stove', role: 'instructor' },
   { name: 'Sam Admin', email: 'admin@alder-street.example', password: 'demo-admin-stove', role: 'admin' },
 ];

@@ -22,6 +22,22 @@ describe('demo seed', () => {
     }
   });
 
+  it('fills the demo maker library from the example designs, the class stove with two versions, shared and printed', async () => {
+    const maker = await signedInClient(server, demoAccounts.find((a) => a.withDemoLibrary)!);
+    const { designs } = (await maker.get('/api/designs?sort=name')).body;
+    // templates/*.json: the invented Alder Street examples, by their own names.
+    // Sorted by name ignoring case.
+    expect(designs.map((d: { name: string }) => d.name)).toEqual(['Alder Street metric tin stove', 'Alder Street No. 10 group cooker', 'Alder Street pint-can stove', 'Alder Street stove with seam keep-outs and concentrator']);
+    const pint = designs.find((d: { name: string }) => d.name === 'Alder Street pint-can stove');
+    expect(pint).toMatchObject({ currentVersion: 2, shared: true, tags: ['class kit', 'pint'] });
+    expect(pint.lastPrintedAt).not.toBeNull();
+    const { versions } = (await maker.get(`/api/designs/${pint.id}/versions`)).body;
+    // Version 1 has 14 jets, version 2 the example's 16: the change line counts them.
+    expect(versions).toHaveLength(2);
+    const instructor = await signedInClient(server, demoAccounts.find((a) => a.role === 'instructor')!);
+    expect((await instructor.get('/api/designs')).body.designs).toEqual([]);
+  });
+
   it('is idempotent', async () => {
     expect((await seedDemo(server.database.db, server.auth)).created).toEqual([]);
   });

@@ -58,7 +58,7 @@ export function ActionsCell() {
           </button>
         </div>
       ) : (
-        <div className="flex flex-wrap gap-2 lg:flex-nowrap">
+        <div className="flex flex-wrap gap-2 lg:grid lg:w-max lg:grid-cols-2">
           <button type="button" disabled={busy} onClick={() => void open()} aria-describedby={nameId} className={plain}>
             Open
           </button>

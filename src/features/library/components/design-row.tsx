@@ -4,16 +4,16 @@ import { DesignRowContext, useDesignRowActions } from './design-row-actions.ts';
 import type { designTableFeatures } from './library-columns.tsx';
 
 /** On a phone each cell is a line of a card, headed by this label. */
-const cellLabel = 'mr-2 text-xs font-medium text-ink-soft sm:hidden';
-const cell = 'block px-3 py-1 sm:table-cell sm:py-3 sm:align-top lg:px-2';
-const emptyCell = 'hidden px-3 sm:table-cell sm:py-3 lg:px-2';
+const cellLabel = 'mr-2 text-xs font-medium text-ink-soft lg:hidden';
+const cell = 'block px-3 py-1 lg:table-cell lg:py-3 lg:align-top lg:px-2';
+const emptyCell = 'hidden px-3 lg:table-cell lg:py-3 lg:px-2';
 
 /** One design in the library table; its cells, drawn from the column definitions, share its state. */
 export function DesignRow({ row }: { row: Row<typeof designTableFeatures, DesignListItem> }) {
   const actions = useDesignRowActions(row.original);
   return (
     <DesignRowContext value={actions}>
-      <tr className="block border-b border-rule py-2 last:border-b-0 sm:table-row sm:py-0">
+      <tr className="block border-b border-rule py-2 last:border-b-0 lg:table-row lg:py-0">
         {row.getAllCells().map((item) => {
           const look = item.column.columnDef.meta;
           const empty = look?.emptyOnPhone?.(row.original) ?? false;

@@ -46,7 +46,7 @@ const srOnly = (text: string) => () => <span className="sr-only">{text}</span>;
 
 export const designColumns = helper.columns([
   // sortFn_text lower-cases both names first, so "alder" and "Birch" sort A to Z.
-  helper.accessor('name', { id: 'name' satisfies DesignSortColumn, header: 'Name', sortFn: 'text', sortDescFirst: false, cell: NameCell }),
+  helper.accessor('name', { id: 'name' satisfies DesignSortColumn, header: 'Name', sortFn: 'text', sortDescFirst: false, cell: NameCell, meta: { cellClass: 'lg:min-w-52' } }),
   helper.accessor('tags', {
     header: 'Tags',
     enableSorting: false,

@@ -46,7 +46,7 @@ export function LibraryFilters({ search, onSearch, tag, tags, onTag, sorting, on
           ))}
         </select>
       </label>
-      <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft sm:hidden">
+      <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft lg:hidden">
         Sort
         <select
           value={current ? valueOf(current) : ''}
