@@ -20,6 +20,8 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
 
   it('starts from the landing page without an account and sees the layout and its checks', async () => {
     await page.goto(server.url);
+    await page.getByRole('link', { name: 'Start designing' }).waitFor();
+    await page.screenshot({ path: artifactPath('landing-1280.png'), fullPage: true });
     await page.getByRole('link', { name: 'Start designing' }).click();
     await page.getByRole('heading', { name: 'Design a stove' }).waitFor();
     await page.getByRole('list', { name: 'Findings' }).or(page.getByText('No findings')).first().waitFor();
@@ -93,6 +95,10 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
   it('works on a phone screen without sideways scrolling', async () => {
     const phone = await browser.newPage();
     await phone.setViewportSize({ width: 390, height: 844 });
+    await phone.goto(server.url);
+    await phone.getByRole('link', { name: 'Start designing' }).waitFor();
+    expect(await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+    await phone.screenshot({ path: artifactPath('landing-390.png'), fullPage: true });
     await phone.goto(`${server.url}/design`);
     await phone.getByRole('heading', { name: 'Design a stove' }).waitFor();
     const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);

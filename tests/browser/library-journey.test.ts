@@ -131,6 +131,10 @@ describe.skipIf(skip)('a maker saves, versions, restores and shares a design', (
       // ISO 32000-1 section 7.5.2: a PDF file begins with the header "%PDF-".
       expect(readFileSync(path).subarray(0, 5).toString('latin1')).toBe('%PDF-');
       await guest.screenshot({ path: artifactPath('shared-design-1280.png'), fullPage: true });
+      await guest.setViewportSize({ width: 390, height: 844 });
+      await guest.getByRole('list', { name: 'Sheets of the kit' }).waitFor();
+      expect(await overflowX(guest)).toBeLessThanOrEqual(0);
+      await guest.screenshot({ path: artifactPath('shared-design-390.png'), fullPage: true });
 
       await guest.goto(`${server.url}/shared/not-a-real-token`);
       await guest.getByRole('heading', { name: 'This link does not work any more' }).waitFor();

@@ -13,22 +13,14 @@ export function HomePage() {
   const { data: account } = useAccount();
   return (
     <Page title="Canwright" width="wide" intro="Canwright sizes the air holes of a wood-gas can stove, lays them out evenly, checks them, and prints true-scale templates to tape on the can and drill through.">
-      <ol className="grid gap-4 sm:grid-cols-2">
-        {steps.map(([title, text], index) => (
-          <li key={title} className="rounded-lg border border-rule bg-white p-5">
-            <p className="text-sm font-medium text-ember-700">Step {index + 1}</p>
-            <h2 className="mt-1 font-semibold">{title}</h2>
-            <p className="mt-1 text-sm text-ink-soft">{text}</p>
-          </li>
-        ))}
-      </ol>
-      <div className="mt-8 flex flex-wrap gap-3">
+      {/* The way in comes first, so a phone shows it without scrolling. */}
+      <div className="flex flex-wrap gap-3">
         <Link to="/design" className="rounded-md bg-ember-600 px-4 py-2 font-medium text-white hover:bg-ember-700">
           Start designing
         </Link>
         {account ? (
-          <Link to="/account" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
-            Go to your account
+          <Link to="/library" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
+            Your library
           </Link>
         ) : (
           <>
@@ -41,6 +33,15 @@ export function HomePage() {
           </>
         )}
       </div>
+      <ol className="mt-8 grid gap-4 sm:grid-cols-2">
+        {steps.map(([title, text], index) => (
+          <li key={title} className="rounded-lg border border-rule bg-white p-5">
+            <p className="text-sm font-medium text-ember-700">Step {index + 1}</p>
+            <h2 className="mt-1 font-semibold">{title}</h2>
+            <p className="mt-1 text-sm text-ink-soft">{text}</p>
+          </li>
+        ))}
+      </ol>
     </Page>
   );
 }
