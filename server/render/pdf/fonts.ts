@@ -45,7 +45,26 @@ let prepared: Promise<Record<FontWeight, PreparedFont>> | undefined;
 async function prepareFont(specifier: string): Promise<PreparedFont> {
   const path = createRequire(import.meta.url).resolve(specifier);
   const sfnt = convertWoffToSfnt(new Uint8Array(await readFile(path)));
-  return { sfnt, parsed: fontkit.create(sfnt) };
+  return { sfnt, parsed: memoizeLayout(fontkit.create(sfnt)) };
+}
+
+/**
+ * Without shaping a string's layout depends only on the string, and every kit lays out the same
+ * few characters again (each document's subset embedder asks afresh): remember each answer for
+ * the process. pdf-lib reads the glyphs and never changes them. Other calls reach the parsed font
+ * through the prototype.
+ */
+function memoizeLayout(parsed: ParsedFont): ParsedFont {
+  const runs = new Map<string, ReturnType<ParsedFont['layout']>>();
+  const layout: ParsedFont['layout'] = (text, features) => {
+    // Only single characters (how pdf-page-context asks), so the memory stays a few hundred entries;
+    // the features are always FEATURES above, so the text alone is the key.
+    if ([...text].length !== 1) return parsed.layout(text, features);
+    let run = runs.get(text);
+    if (!run) runs.set(text, (run = parsed.layout(text, features)));
+    return run;
+  };
+  return Object.create(parsed, { layout: { value: layout } }) as ParsedFont;
 }
 
 /** Reads and parses both weights on first use; later calls share the result. */

@@ -45,6 +45,9 @@ interface SheetState {
  */
 export async function createPdfDocument(options: PdfDocumentOptions): Promise<PdfKit> {
   const doc = await PDFDocument.create({ updateMetadata: false });
+  // pdf-lib compresses font files with pako (JavaScript); Node's zlib makes the same deflate
+  // stream at the same level natively, several times faster (font embedding was ~1.4 ms a kit).
+  doc.context.flateStream = (contents, dict = {}) => doc.context.stream(deflateSync(contents, { level: 6 }), { ...dict, Filter: 'FlateDecode' });
   const date = options.creationDate ?? new Date();
   doc.setTitle(options.title, { showInWindowTitleBar: true });
   if (options.subject !== undefined) doc.setSubject(options.subject);
