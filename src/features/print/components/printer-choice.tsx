@@ -22,7 +22,9 @@ export function usePrinterChoices(): { choices: Choice[]; preferred: string } {
     ...(browserProfile ? [{ value: 'browser', label: `${browserProfile.name} (this browser)`, profile: browserProfile }] : []),
     { value: 'none', label: 'No correction: print as drawn' },
   ];
-  const preferred = accountProfiles.find((p) => p.isDefault) ? `account:${accountProfiles.find((p) => p.isDefault)!.id}` : choices[0]!.value;
+  // The account's default printer, else the first measured one, else no correction.
+  const accountDefault = accountProfiles.find((p) => p.isDefault);
+  const preferred = accountDefault ? `account:${accountDefault.id}` : choices[0]!.value;
   return { choices, preferred };
 }
 
