@@ -92,6 +92,27 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     expect(svg).toMatch(/height="297mm"/);
   });
 
+  it('scales the kit for the printer measured in this browser, sending its measurements with the request', async () => {
+    const profile = { name: 'Garage inkjet', measuredXMm: 152.25, measuredYMm: 198.6 };
+    await page.evaluate((value) => localStorage.setItem('canwright.printerProfile.v1', value), JSON.stringify(profile));
+    await page.reload();
+    const printer = page.getByRole('combobox', { name: /^Printer/ });
+    await expect.poll(async () => (await printer.locator('option:checked').textContent()) ?? '').toBe('Garage inkjet (this browser)');
+    const requested = page.waitForRequest((r) => r.url().endsWith('/api/render/pdf'));
+    const downloading = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Download PDF kit' }).click();
+    expect((await requested).postDataJSON().printer).toEqual({ measuredXMm: 152.25, measuredYMm: 198.6 });
+    await downloading;
+
+    await printer.selectOption({ label: 'No correction: print as drawn' });
+    const plain = page.waitForRequest((r) => r.url().endsWith('/api/render/pdf'));
+    const again = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Download PDF kit' }).click();
+    expect((await plain).postDataJSON().printer).toBeUndefined();
+    await again;
+    await page.evaluate(() => localStorage.removeItem('canwright.printerProfile.v1'));
+  });
+
   it('works on a phone screen without sideways scrolling', async () => {
     const phone = await browser.newPage();
     await phone.setViewportSize({ width: 390, height: 844 });
