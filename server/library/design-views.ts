@@ -46,7 +46,7 @@ export function toVersionItems(rows: VersionRow[]): VersionListItem[] {
   });
 }
 
-/** Name, document and date only: nothing that says whose design it is. */
+/** Name, document, version and date only: nothing that says whose design it is. */
 export function toSharedDesign({ design, document }: CurrentDesign): SharedDesign {
-  return { name: design.name, document, updatedAt: design.updatedAt.toISOString() };
+  return { name: design.name, document, version: design.currentVersion, updatedAt: design.updatedAt.toISOString() };
 }

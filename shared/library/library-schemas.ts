@@ -110,7 +110,7 @@ export const versionDetailSchema = versionListItemSchema.omit({ changes: true })
 export type VersionDetail = z.infer<typeof versionDetailSchema>;
 
 /** GET /api/shared/:token: what anyone with the link sees; nothing about the owner. */
-export const sharedDesignSchema = z.object({ name: z.string(), document: designSchema, updatedAt: z.string() });
+export const sharedDesignSchema = z.object({ name: z.string(), document: designSchema, version: z.number().int().min(1), updatedAt: z.string() });
 export type SharedDesign = z.infer<typeof sharedDesignSchema>;
 
 /** The page a share link opens in the app, and the API route that page reads. */

@@ -57,7 +57,7 @@ export function buildSheetContent(design: Design, layout: Layout, pilots: Readon
       const groups = [...bySource].map(([sourceId, group]): BuildSheetHoleGroup => {
         const first = group[0]!;
         const pilot = pilots.get(first.drillId);
-        return { label: sources.find((r) => r.id === sourceId)?.label ?? sourceId, count: group.length, drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
+        return { label: sources.find((r) => r.id === sourceId)?.label?.trim() || sourceId, count: group.length, drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
       });
       return [{ part: part.name ?? part.role, groups }];
     }),

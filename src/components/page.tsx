@@ -3,7 +3,7 @@ import { useEffect, type ReactNode } from 'react';
 /** A page body with its heading; also sets the document title. */
 export function Page({ title, intro, width = 'narrow', children }: { title: string; intro?: ReactNode; width?: 'narrow' | 'wide'; children: ReactNode }) {
   useEffect(() => {
-    document.title = `${title} · Canwright`;
+    document.title = title === 'Canwright' ? title : `${title} · Canwright`;
   }, [title]);
   return (
     <div className={`mx-auto w-full px-4 py-8 ${width === 'narrow' ? 'max-w-md' : 'max-w-5xl'}`}>

@@ -83,8 +83,8 @@ describe('share links', () => {
     const visitor = new HttpClient(server.url);
     const seen = await visitor.get(`/api/shared/${token}`);
     expect(seen.status).toBe(200);
-    expect(Object.keys(seen.body).sort()).toEqual(['document', 'name', 'updatedAt']);
-    expect(seen.body).toMatchObject({ name: pintCanStove.name, document: { name: pintCanStove.name } });
+    expect(Object.keys(seen.body).sort()).toEqual(['document', 'name', 'updatedAt', 'version']);
+    expect(seen.body).toMatchObject({ name: pintCanStove.name, version: 1, document: { name: pintCanStove.name } });
     expect(seen.headers.get('cache-control')).toBe('no-store');
     const text = JSON.stringify(seen.body);
     expect(text).not.toContain(user.email);

@@ -113,6 +113,23 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     await page.evaluate(() => localStorage.removeItem('canwright.printerProfile.v1'));
   });
 
+  it('explains on the print screen, instead of failing, when the design has no holes', async () => {
+    const kept = await page.evaluate(() => localStorage.getItem('canwright.draft.v1'));
+    await page.evaluate(() => {
+      const draft = JSON.parse(localStorage.getItem('canwright.draft.v1') ?? 'null');
+      const current = draft.history[draft.index];
+      for (const part of current.parts) {
+        part.sideRows = [];
+        if (part.endPatterns) part.endPatterns = [];
+      }
+      localStorage.setItem('canwright.draft.v1', JSON.stringify(draft));
+    });
+    await page.goto(`${server.url}/design/print`);
+    await page.getByText('This design has no holes to print yet').waitFor();
+    expect(await page.getByRole('button', { name: 'Download PDF kit' }).isDisabled()).toBe(true);
+    await page.evaluate((draft) => localStorage.setItem('canwright.draft.v1', draft ?? ''), kept);
+  });
+
   it('works on a phone screen without sideways scrolling', async () => {
     const phone = await browser.newPage();
     await phone.setViewportSize({ width: 390, height: 844 });

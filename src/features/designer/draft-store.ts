@@ -13,6 +13,8 @@ export interface Draft {
 
 const KEY = 'canwright.draft.v1';
 const MAX_HISTORY = 100;
+/** Steps kept across a reload (localStorage is small and shared with the rest of the site). */
+const STORED_STEPS = 20;
 const listeners = new Set<() => void>();
 let draft: Draft | null = read();
 
@@ -28,7 +30,11 @@ function read(): Draft | null {
 function write(next: Draft | null): void {
   draft = next;
   try {
-    if (next) localStorage.setItem(KEY, JSON.stringify({ ...next, history: next.history.slice(-20), index: Math.min(next.index, 19) }));
+    if (next) {
+      // Only the last steps are kept; the position moves with them (it may sit before the newest after undo).
+      const dropped = Math.max(0, next.history.length - STORED_STEPS);
+      localStorage.setItem(KEY, JSON.stringify({ ...next, history: next.history.slice(dropped), index: Math.max(0, next.index - dropped) }));
+    }
     else localStorage.removeItem(KEY);
   } catch {
     // Storage full or blocked: the draft still lives for this page.

@@ -22,7 +22,7 @@ export function UnitsPreference({ current }: { current: UnitSystem }) {
         Units
       </h2>
       <fieldset className="mt-3 flex flex-col gap-2">
-        <legend className="text-sm text-ink-soft">Show and enter lengths in</legend>
+        <legend className="text-sm text-ink-soft">New designs and examples open in (each design keeps its own units, which you can change on the design screen)</legend>
         {choices.map((choice) => (
           <label key={choice.value} className="flex cursor-pointer items-start gap-3 rounded-md p-2 hover:bg-ember-50">
             <input

@@ -47,7 +47,7 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
         Primary : secondary = <strong>{ratio === null ? '–' : `${ratio.toFixed(1)} : 1`}</strong>
         <label className="ml-3 inline-flex items-center gap-1">
           target
-          <input type="number" min={0.5} max={50} step={0.5} value={targetRatio} onChange={(e) => e.target.valueAsNumber > 0 && onTargetChange(e.target.valueAsNumber)} className="w-16 rounded border border-rule px-1" aria-label="Target primary to secondary ratio" />
+          <TargetRatioInput value={targetRatio} onChange={onTargetChange} />
           : 1
         </label>
       </p>
@@ -82,5 +82,50 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
         </div>
       )}
     </section>
+  );
+}
+
+/** The schema caps the target at 50 (shared/design/design-schema.ts); under 0.5 : 1 no stove draws its jets (common practice, no source). */
+const TARGET_MIN = 0.5;
+const TARGET_MAX = 50;
+
+/**
+ * The target ratio as typed: only a number in range reaches the design, so a half-typed "54" can
+ * never make the design invalid (which would hide this very box); out of range shows why instead.
+ */
+function TargetRatioInput({ value, onChange }: { value: number; onChange(ratio: number): void }) {
+  const [text, setText] = useState(String(value));
+  const [lastValue, setLastValue] = useState(value);
+  if (value !== lastValue) {
+    setLastValue(value);
+    setText(String(value));
+  }
+  const typed = Number(text);
+  const inRange = text.trim() !== '' && typed >= TARGET_MIN && typed <= TARGET_MAX;
+  return (
+    <>
+      <input
+        type="number"
+        min={TARGET_MIN}
+        max={TARGET_MAX}
+        step={0.5}
+        value={text}
+        onChange={(e) => {
+          setText(e.target.value);
+          const next = e.target.valueAsNumber;
+          if (next >= TARGET_MIN && next <= TARGET_MAX) onChange(next);
+        }}
+        onBlur={() => !inRange && setText(String(value))}
+        aria-invalid={inRange ? undefined : true}
+        aria-describedby={inRange ? undefined : 'target-ratio-error'}
+        className="w-16 rounded border border-rule px-1 aria-[invalid]:border-danger"
+        aria-label="Target primary to secondary ratio"
+      />
+      {!inRange && (
+        <span id="target-ratio-error" className="text-xs text-danger">
+          from {TARGET_MIN} to {TARGET_MAX}
+        </span>
+      )}
+    </>
   );
 }

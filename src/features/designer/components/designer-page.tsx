@@ -6,10 +6,12 @@ import { designSchema, type Design, type DesignInput } from '../../../../shared/
 import { layoutDocument, type Finding } from '../../../../shared/layout/index.ts';
 import { Page } from '../../../components/page.tsx';
 import { safetyLine } from '../../../components/safety-note.tsx';
+import { useAccount } from '../../account/api/get-account.ts';
 import { SaveBar } from '../../library/components/save-bar.tsx';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
 import { currentDocument, draftStore, useDraft } from '../draft-store.ts';
 import { examples } from '../examples.ts';
+import { ExamplePicker } from './example-picker.tsx';
 import { AirflowPanel } from './airflow-panel.tsx';
 import { FindingsList } from './findings-list.tsx';
 import { PartEditor } from './part-editor.tsx';
@@ -19,7 +21,10 @@ type View = 'wall' | 'bottom' | 'assembled';
 /** The design screen: edit on the left, see the layout, the checks, the air and the print on the right. */
 export function DesignerPage() {
   const draft = useDraft();
-  const start = currentDocument(draft) ?? examples[0]!.document;
+  const { data: account } = useAccount();
+  // A signed-in maker's new designs and examples open in the units of their settings.
+  const inPreferredUnits = (document: DesignInput): DesignInput => (account ? { ...document, units: account.units } : document);
+  const start = currentDocument(draft) ?? inPreferredUnits(examples[0]!.document);
   useEffect(() => {
     if (!draftStore.get()) draftStore.start(start);
   }, [start]);
@@ -53,8 +58,22 @@ export function DesignerPage() {
   const parts = values.parts ?? [];
   const part = parts[Math.min(partIndex, parts.length - 1)];
   const layout = result.ok ? result.layout : undefined;
+  // The chosen finding as it stands after the latest edit (gone when the edit fixed it).
+  const activeFinding = finding && layout?.findings.find((f) => f.rule === finding.rule && f.message === finding.message);
   const pieces = layout?.pieces.filter((p) => p.partId === part?.id) ?? [];
-  const piece = pieces.find((p) => (view === 'bottom' ? p.kind === 'disc' : p.kind === 'wrap-strip')) ?? pieces[0];
+  // A part without a piece of this view's kind (a shell has no bottom disc) says so, rather than showing another part.
+  const piece = view === 'assembled' ? pieces[0] : pieces.find((p) => (view === 'bottom' ? p.kind === 'disc' : p.kind === 'wrap-strip'));
+
+  /** Choosing a finding shows the part and view its holes are on, so the highlight is in sight. */
+  function selectFinding(next: Finding | undefined) {
+    setFinding(next);
+    const hole = next && layout?.holes.find((h) => h.id === next.holeIds[0]);
+    const onPiece = hole && layout?.pieces.find((p) => p.id === hole.pieceId);
+    if (!onPiece) return;
+    const index = parts.findIndex((p) => p.id === onPiece.partId);
+    if (index >= 0) setPartIndex(index);
+    if (view !== 'assembled') setView(onPiece.kind === 'disc' ? 'bottom' : 'wall');
+  }
 
   return (
     <Page title="Design a stove" width="wide">
@@ -80,17 +99,7 @@ export function DesignerPage() {
             </button>
           </div>
           <SaveBar document={values} />
-          <label className="flex w-full min-w-0 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-72">
-            Start again from an example
-            <select value="" onChange={(e) => { const ex = examples.find((x) => x.id === e.target.value); if (ex) replace(designSchema.parse(ex.document)); }} className="min-h-10 w-full rounded-md border border-rule bg-white px-2 text-sm text-ink">
-              <option value="">Choose…</option>
-              {examples.map((ex) => (
-                <option key={ex.id} value={ex.id}>
-                  {ex.document.name}
-                </option>
-              ))}
-            </select>
-          </label>
+          <ExamplePicker onLoad={(document) => replace(designSchema.parse(inPreferredUnits(document)))} />
         </div>
 
         <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.1fr)]">
@@ -128,9 +137,11 @@ export function DesignerPage() {
               </div>
               <div className="h-80 overflow-hidden rounded-lg border border-rule bg-white sm:h-96">
                 {layout && piece ? (
-                  <LayoutPreview layout={layout} units={units} view={view} pieceId={piece.id} highlight={finding ? new Set(finding.holeIds) : undefined} />
+                  <LayoutPreview layout={layout} units={units} view={view} pieceId={piece.id} highlight={activeFinding ? new Set(activeFinding.holeIds) : undefined} />
                 ) : (
-                  <p className="p-4 text-sm text-ink-soft">Nothing to show for this part in this view yet.</p>
+                  <p className="p-4 text-sm text-ink-soft">
+                    {!layout ? 'The preview comes back when the values marked on the left are fixed.' : `${part?.name ?? 'This part'} has no ${view === 'bottom' ? 'holes in its bottom' : 'holes in its wall'}.`}
+                  </p>
                 )}
               </div>
             </section>
@@ -140,7 +151,7 @@ export function DesignerPage() {
                   <h2 id="findings-heading" className="font-semibold">
                     Checks
                   </h2>
-                  <FindingsList findings={layout.findings} selected={finding} onSelect={setFinding} />
+                  <FindingsList findings={layout.findings} holeCount={layout.holes.length} selected={activeFinding} onSelect={selectFinding} />
                 </section>
                 {result.ok && <AirflowPanel design={designSchema.parse(values)} layout={layout} units={units} onTargetChange={(ratio) => form.setValue('airflow.targetRatio', ratio)} onApply={replace} />}
                 <section aria-labelledby="print-heading" className="flex flex-col gap-2">

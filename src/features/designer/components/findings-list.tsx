@@ -3,7 +3,8 @@ import type { Finding } from '../../../../shared/layout/index.ts';
 const marks = { error: { text: 'Error', className: 'bg-danger/10 text-danger' }, warning: { text: 'Check', className: 'bg-ember-50 text-ember-700' }, note: { text: 'Note', className: 'bg-paper text-ink-soft' } } as const;
 
 /** The checks' findings; choosing one highlights its holes in the preview. */
-export function FindingsList({ findings, selected, onSelect }: { findings: Finding[]; selected?: Finding; onSelect(finding: Finding | undefined): void }) {
+export function FindingsList({ findings, holeCount, selected, onSelect }: { findings: Finding[]; holeCount: number; selected?: Finding; onSelect(finding: Finding | undefined): void }) {
+  if (holeCount === 0 && findings.length === 0) return <p className="text-sm text-ink-soft">No holes yet: add a row round the wall or rings on the bottom.</p>;
   if (findings.length === 0) return <p className="text-sm text-ok">No findings: the layout passes every check.</p>;
   return (
     <ul className="flex flex-col gap-2" aria-label="Findings">
@@ -20,7 +21,7 @@ export function FindingsList({ findings, selected, onSelect }: { findings: Findi
             >
               <span className={`mr-2 rounded px-1.5 py-0.5 text-xs font-medium ${mark.className}`}>{mark.text}</span>
               {finding.message}
-              {finding.holeIds.length > 0 && <span className="ml-1 text-xs text-ink-soft">({finding.holeIds.length} holes)</span>}
+              {finding.holeIds.length > 0 && <span className="ml-1 text-xs text-ink-soft">({finding.holeIds.length} {finding.holeIds.length === 1 ? 'hole' : 'holes'})</span>}
             </button>
           </li>
         );

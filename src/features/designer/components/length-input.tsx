@@ -25,6 +25,9 @@ export function LengthInput({ label, valueMm, units, onChange, error, className 
   }
 
   function commit() {
+    // Leaving a field untouched changes nothing: the shown text is rounded (to 1/64 in or 0.01 mm),
+    // and committing it would move a hole or turn a catalogue can into a measured one.
+    if (text === shown) return setProblem(undefined);
     const parsed = parseLength(text, units);
     if (!parsed.ok) return setProblem(parsed.error);
     setProblem(undefined);

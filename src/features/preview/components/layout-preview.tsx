@@ -25,7 +25,7 @@ const NUDGE_PX = 40;
 export function LayoutPreview({ layout, units, view, pieceId, highlight }: LayoutPreviewProps) {
   const [controller] = useState(() => new PreviewController());
   const canvasRef = useRef<HTMLCanvasElement>(null);
-  const shown = useRef<{ layout: Layout; view: PreviewView; pieceId: string | null } | null>(null);
+  const shown = useRef<{ size: string; view: PreviewView; pieceId: string | null } | null>(null);
   const helpId = useId();
   const scene = useMemo(() => planScene(layout, units, view, pieceId, highlight), [layout, units, view, pieceId, highlight]);
 
@@ -35,12 +35,15 @@ export function LayoutPreview({ layout, units, view, pieceId, highlight }: Layou
   }, [controller]);
 
   useEffect(() => {
-    // A new design, view or piece starts fitted; new highlights or units keep the maker's zoom.
+    // Another view, piece or piece size starts fitted; edits that keep the drawing's size (a row
+    // moved, a drill changed, a rename), new highlights or units keep the maker's zoom and pan.
     const last = shown.current;
-    const refit = !last || last.layout !== layout || last.view !== view || last.pieceId !== scene.pieceId;
-    shown.current = { layout, view, pieceId: scene.pieceId };
+    const { minX, minY, maxX, maxY } = scene.bounds;
+    const size = `${Math.round(maxX - minX)}x${Math.round(maxY - minY)}`;
+    const refit = !last || last.size !== size || last.view !== view || last.pieceId !== scene.pieceId;
+    shown.current = { size, view, pieceId: scene.pieceId };
     controller.setScene(scene, refit);
-  }, [controller, scene, layout, view]);
+  }, [controller, scene, view]);
 
   function onKeyDown(event: KeyboardEvent<HTMLDivElement>) {
     const moves: Record<string, () => void> = {

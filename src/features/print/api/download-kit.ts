@@ -10,6 +10,8 @@ export interface KitRequest {
   print: PrintOptions;
   printer?: Pick<PrinterProfileInput, 'measuredXMm' | 'measuredYMm'>;
   sheet?: number;
+  /** Printed in each sheet's title block. */
+  version?: string;
 }
 
 const paths: Record<KitFormat, string> = { pdf: '/api/render/pdf', svg: '/api/render/svg', csv: '/api/render/holes.csv' };
@@ -20,7 +22,7 @@ export async function downloadKit(format: KitFormat, request: KitRequest): Promi
   const response = await fetch(paths[format] + query, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ design: request.design, print: request.print, printer: request.printer }),
+    body: JSON.stringify({ design: request.design, print: request.print, printer: request.printer, version: request.version }),
   });
   if (!response.ok) {
     const body = (await response.json().catch(() => undefined)) as { error?: { code?: string; message?: string } } | undefined;

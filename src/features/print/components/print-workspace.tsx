@@ -1,4 +1,5 @@
 import { useMemo, useState } from 'react';
+import { Link } from 'react-router';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import type { PrintOptions } from '../../../../shared/print/paper.ts';
 import { Button } from '../../../components/button.tsx';
@@ -7,6 +8,7 @@ import { PaperOptions } from '../../../components/paper-options.tsx';
 import { safetyLine } from '../../../components/safety-note.tsx';
 import { useAccount } from '../../account/api/get-account.ts';
 import { useMarkPrinted } from '../../library/api/mark-printed.ts';
+import { guessPaper } from '../../printer-profiles/guess-paper.ts';
 import { downloadKit, type KitFormat } from '../api/download-kit.ts';
 import { useKitPlan } from '../use-kit-plan.ts';
 import { BuildSheetView } from './build-sheet-view.tsx';
@@ -21,13 +23,15 @@ const MARGIN_MM = 12.7; // 1/2 in: inside what common desktop printers can reach
  * table), the calibration sheet and the build sheet. `savedId`: the library design the kit comes
  * from, whose "last printed" a PDF download updates.
  */
-export function PrintWorkspace({ design, savedId }: { design: DesignInput; savedId?: string }) {
+export function PrintWorkspace({ design, savedId, version, checksLink }: { design: DesignInput; savedId?: string; version: string; checksLink?: string }) {
   const { data: account } = useAccount();
   const [paper, setPaper] = useState<PrintOptions['paper']>();
+  // A visitor's first guess is the paper of their region; the account's setting wins.
+  const [guessedPaper] = useState(guessPaper);
   const [orientation, setOrientation] = useState<PrintOptions['orientation']>('portrait');
-  const chosenPaper = paper ?? account?.defaultPaper ?? 'letter';
+  const chosenPaper = paper ?? account?.defaultPaper ?? guessedPaper;
   const print = useMemo((): PrintOptions => ({ paper: chosenPaper, orientation, marginMm: MARGIN_MM }), [chosenPaper, orientation]);
-  const kit = useKitPlan(design, print);
+  const kit = useKitPlan(design, print, version);
   const printers = usePrinterChoices();
   const [printerValue, setPrinterValue] = useState<string>();
   const printer = printers.choices.find((c) => c.value === (printerValue ?? printers.preferred)) ?? printers.choices.at(-1)!;
@@ -40,7 +44,7 @@ export function PrintWorkspace({ design, savedId }: { design: DesignInput; saved
     setStatus(undefined);
     try {
       const correction = printer.profile ? { measuredXMm: printer.profile.measuredXMm, measuredYMm: printer.profile.measuredYMm } : undefined;
-      const { fileName, sheets } = await downloadKit(format, { design, print, printer: correction, sheet });
+      const { fileName, sheets } = await downloadKit(format, { design, print, printer: correction, sheet, version });
       if (format === 'pdf' && savedId && account) markPrinted.mutate(savedId);
       setStatus({ tone: 'success', text: format === 'pdf' ? `Saved ${fileName} (${sheets} sheet${sheets === 1 ? '' : 's'} and the build sheet).` : `Saved ${fileName}.` });
     } catch (error) {
@@ -84,6 +88,20 @@ export function PrintWorkspace({ design, savedId }: { design: DesignInput; saved
         <h2 id="print-sheets-heading" className="font-semibold">
           Sheets
         </h2>
+        {kit.ok && kit.errors + kit.warnings > 0 && (
+          <Notice tone={kit.errors ? 'error' : 'info'}>
+            The checks found {describeFindings(kit.errors, kit.warnings)} in this layout. Print it if you mean to
+            {checksLink ? (
+              <>
+                , or{' '}
+                <Link to={checksLink} className="underline">
+                  go back to the checks
+                </Link>
+              </>
+            ) : null}
+            .
+          </Notice>
+        )}
         {kit.ok ? (
           <>
             <p className="text-sm text-ink-soft">
@@ -111,4 +129,10 @@ export function PrintWorkspace({ design, savedId }: { design: DesignInput; saved
       {kit.ok && <BuildSheetView content={kit.plan.buildSheet} />}
     </div>
   );
+}
+
+/** "1 error and 2 warnings" */
+function describeFindings(errors: number, warnings: number): string {
+  const part = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+  return [errors ? part(errors, 'error') : '', warnings ? part(warnings, 'warning') : ''].filter(Boolean).join(' and ');
 }

@@ -86,7 +86,7 @@ export function SharedDesignPage() {
         </div>
       </div>
       <div className="mt-8">
-        <PrintWorkspace design={document} />
+        <PrintWorkspace design={document} version={String(shared.data.version)} />
       </div>
     </Page>
   );
