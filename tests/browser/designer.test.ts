@@ -32,11 +32,11 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
   it('flags jets spread too far apart, and undo takes the change back', async () => {
     const jets = page.getByRole('group', { name: 'Secondary jets' });
     await jets.getByLabel('Holes (positions)').fill('9');
-    await page.getByText(/Jets of "jets" are up to/).waitFor();
+    await page.getByText(/Jets of "Secondary jets" are up to/).waitFor();
     await page.waitForTimeout(400); // the edit becomes an undo step after 300 ms
     await page.getByRole('button', { name: 'Undo' }).click();
     await expect.poll(() => jets.getByLabel('Holes (positions)').inputValue()).toBe('16');
-    await expect.poll(() => page.getByText(/Jets of "jets" are up to/).count()).toBe(0);
+    await expect.poll(() => page.getByText(/Jets of "Secondary jets" are up to/).count()).toBe(0);
   });
 
   it('keeps the unsaved design through a reload', async () => {

@@ -1,6 +1,6 @@
 import type { Hole } from '../layout-types.ts';
 import { angularDistanceDeg } from '../angles.ts';
-import { FindingGroups, mm, type Check } from './check-context.ts';
+import { FindingGroups, mm, nameSource, type Check } from './check-context.ts';
 
 /**
  * Holes off the part (error) or too close to its edges (warning): the top edge and the bottom
@@ -20,7 +20,7 @@ export const checkEdges: Check = ({ design, pieces, holesByPiece }) => {
   for (const piece of pieces) {
     for (const hole of holesByPiece.get(piece.id) ?? []) {
       const r = hole.diameterMm / 2;
-      const where = `"${hole.sourceId}" on ${piece.name}`;
+      const where = `"${nameSource(design, hole.sourceId)}" on ${piece.name}`;
       if (piece.kind === 'wrap-strip') {
         const below = hole.yMm - r;
         const above = piece.vesselHeightMm - (hole.yMm + r);

@@ -1,6 +1,6 @@
 import type { Hole } from '../layout-types.ts';
 import { normalizeDeg } from '../angles.ts';
-import { mm, type Check } from './check-context.ts';
+import { mm, nameSource, type Check } from './check-context.ts';
 
 /**
  * Secondary jets must sit close enough for their flames to join into one ring: warn above the
@@ -36,7 +36,7 @@ export const checkJetPitch: Check = ({ design, pieces, holesByPiece }) => {
         rule: 'jet-pitch',
         severity: error ? ('error' as const) : ('warning' as const),
         pieceId: piece.id,
-        message: `Jets of "${rowId}" are up to ${mm(pitchMm)} mm apart (limit ${mm(error ? jetPitchErrorMm : jetPitchWarnMm)} mm): their flames will not join into one ring. Add holes or close the gap.`,
+        message: `Jets of "${nameSource(design, rowId)}" are up to ${mm(pitchMm)} mm apart (limit ${mm(error ? jetPitchErrorMm : jetPitchWarnMm)} mm): their flames will not join into one ring. Add holes or close the gap.`,
         numbers: { pitchMm: mm(pitchMm), warnMm: jetPitchWarnMm, errorMm: jetPitchErrorMm },
         holeIds: [widest.from.id, widest.to.id],
       });

@@ -12,7 +12,7 @@ export const checkDroppedHoles: Check = ({ design, dropped }) => {
         rule: 'dropped-in-keep-out',
         severity: row.count - row.skip.length - count === 0 ? 'error' : 'note',
         pieceId: `${part.id}:wall`,
-        message: `${count} of the ${row.count} positions of "${row.id}" fall in a keep-out and are left out${row.count - row.skip.length - count === 0 ? ': the row has no holes left' : ''}.`,
+        message: `${count} of the ${row.count} positions of "${row.label?.trim() || row.id}" fall in a keep-out and are left out${row.count - row.skip.length - count === 0 ? ': the row has no holes left' : ''}.`,
         numbers: { dropped: count, positions: row.count },
         holeIds: [],
       });

@@ -1,5 +1,6 @@
 import type { Hole } from '../layout-types.ts';
-import { FindingGroups, mm, type Check } from './check-context.ts';
+import type { Design } from '../../design/design-schema.ts';
+import { FindingGroups, mm, nameSource, type Check } from './check-context.ts';
 
 /**
  * Holes that overlap (error) and ligaments, the metal left between hole edges, thinner than the
@@ -25,8 +26,8 @@ export const checkSpacing: Check = ({ design, pieces, holesByPiece }) => {
           severity: overlap ? 'error' : 'warning',
           pieceId: piece.id,
           message: overlap
-            ? `Holes of ${describe(first, second)} overlap on ${piece.name}: they would merge into one ragged hole.`
-            : `Only ${mm(ligament)} mm of metal between holes of ${describe(first, second)} on ${piece.name} (minimum ${minLigament} mm): thin webs tear when drilled and crack when hot.`,
+            ? `Holes of ${describe(design, first, second)} overlap on ${piece.name}: they would merge into one ragged hole.`
+            : `Only ${mm(ligament)} mm of metal between holes of ${describe(design, first, second)} on ${piece.name} (minimum ${minLigament} mm): thin webs tear when drilled and crack when hot.`,
           numbers: { ligamentMm: mm(ligament), minimumMm: minLigament },
         }),
         [a.id, b.id],
@@ -54,7 +55,8 @@ function compare(a: Hole, b: Hole, period: number, toMetal: number, minLigament:
   if (ligament < minLigament - 1e-6) report(a, b, ligament);
 }
 
-function describe(a: Hole, b: Hole): string {
-  return a.sourceId === b.sourceId ? `"${a.sourceId}"` : `"${a.sourceId}" and "${b.sourceId}"`;
+function describe(design: Design, a: Hole, b: Hole): string {
+  const [first, second] = [nameSource(design, a.sourceId), nameSource(design, b.sourceId)];
+  return a.sourceId === b.sourceId ? `"${first}"` : `"${first}" and "${second}"`;
 }
 

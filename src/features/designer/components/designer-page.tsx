@@ -3,12 +3,13 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { Link } from 'react-router';
 import { designSchema, type Design, type DesignInput } from '../../../../shared/design/design-schema.ts';
-import { layoutDocument, type Finding } from '../../../../shared/layout/index.ts';
+import { layoutDocument, type Finding, type Layout } from '../../../../shared/layout/index.ts';
 import { Page } from '../../../components/page.tsx';
 import { safetyLine } from '../../../components/safety-note.tsx';
 import { useAccount } from '../../account/api/get-account.ts';
 import { SaveBar } from '../../library/components/save-bar.tsx';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
+import { describeProblem } from '../describe-problem.ts';
 import { currentDocument, draftStore, useDraft } from '../draft-store.ts';
 import { examples } from '../examples.ts';
 import { ExamplePicker } from './example-picker.tsx';
@@ -57,7 +58,10 @@ export function DesignerPage() {
 
   const parts = values.parts ?? [];
   const part = parts[Math.min(partIndex, parts.length - 1)];
-  const layout = result.ok ? result.layout : undefined;
+  // While a value is being fixed, the preview and checks keep the last layout that worked.
+  const [lastGood, setLastGood] = useState<Layout>();
+  if (result.ok && result.layout !== lastGood) setLastGood(result.layout);
+  const layout = result.ok ? result.layout : lastGood;
   // The chosen finding as it stands after the latest edit (gone when the edit fixed it).
   const activeFinding = finding && layout?.findings.find((f) => f.rule === finding.rule && f.message === finding.message);
   const pieces = layout?.pieces.filter((p) => p.partId === part?.id) ?? [];
@@ -102,6 +106,16 @@ export function DesignerPage() {
           <ExamplePicker onLoad={(document) => replace(designSchema.parse(inPreferredUnits(document)))} />
         </div>
 
+        {!result.ok && (
+          <div role="alert" className="mb-4 rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
+            <p className="font-medium">Some values need fixing; until then the preview and checks show the last layout that worked:</p>
+            <ul className="mt-1 list-disc pl-5">
+              {result.problems.slice(0, 8).map((p) => (
+                <li key={p.path}>{describeProblem(values, p.path, p.message)}</li>
+              ))}
+            </ul>
+          </div>
+        )}
         <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.1fr)]">
           <div className="@container flex min-w-0 flex-col gap-3">
             <div role="tablist" aria-label="Parts" className="flex flex-wrap gap-1">
@@ -112,18 +126,6 @@ export function DesignerPage() {
               ))}
             </div>
             {part && <PartEditor key={`${partIndex}-${part.id}`} partIndex={Math.min(partIndex, parts.length - 1)} units={units} />}
-            {!result.ok && (
-              <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
-                <p className="font-medium">Some values need fixing before the layout updates:</p>
-                <ul className="mt-1 list-disc pl-5">
-                  {result.problems.slice(0, 8).map((p) => (
-                    <li key={p.path}>
-                      {p.path}: {p.message}
-                    </li>
-                  ))}
-                </ul>
-              </div>
-            )}
           </div>
 
           <div className="flex min-w-0 flex-col gap-5">
@@ -154,7 +156,7 @@ export function DesignerPage() {
                   <FindingsList findings={layout.findings} holeCount={layout.holes.length} selected={activeFinding} onSelect={selectFinding} />
                 </section>
                 {result.ok && <AirflowPanel design={designSchema.parse(values)} layout={layout} units={units} onTargetChange={(ratio) => form.setValue('airflow.targetRatio', ratio)} onApply={replace} />}
-                <section aria-labelledby="print-heading" className="flex flex-col gap-2">
+                {result.ok && <section aria-labelledby="print-heading" className="flex flex-col gap-2">
                   <h2 id="print-heading" className="font-semibold">
                     Print the kit
                   </h2>
@@ -166,7 +168,7 @@ export function DesignerPage() {
                     </Link>
                   </div>
                   <p className="rounded-md border border-ember-600/30 bg-ember-50 px-3 py-2 text-sm">{safetyLine}</p>
-                </section>
+                </section>}
               </>
             )}
             <p className="text-sm text-ink-soft">Your design is kept in this browser as you work; the save bar above keeps it in your library.</p>

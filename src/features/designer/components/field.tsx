@@ -1,4 +1,5 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { plainMessage } from '../describe-problem.ts';
 
 const controlClass = 'min-h-9 w-full rounded-md border border-rule bg-white px-2 py-1 text-sm aria-[invalid]:border-danger';
 
@@ -11,7 +12,7 @@ function Labelled({ label, error, children }: { label: string; error?: string; c
         {label}
       </label>
       {children(id)}
-      {error && <p className="text-xs text-danger">{error}</p>}
+      {error && <p className="text-xs text-danger">{plainMessage(error)}</p>}
     </div>
   );
 }

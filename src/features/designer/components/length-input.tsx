@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
 import { formatLength, parseLength } from '../../../../shared/units/index.ts';
+import { plainMessage } from '../describe-problem.ts';
 
 interface LengthInputProps {
   label: string;
@@ -35,7 +36,7 @@ export function LengthInput({ label, valueMm, units, onChange, error, className 
     setText(formatLength(parsed.mm, units));
   }
 
-  const message = problem ?? error;
+  const message = problem ?? (error ? plainMessage(error) : undefined);
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={id} className="text-xs font-medium text-ink-soft">

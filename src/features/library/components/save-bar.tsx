@@ -22,7 +22,7 @@ const linkClass = 'inline-flex min-h-10 items-center rounded-md px-3 text-sm fon
 function describeFailure(error: unknown): Status {
   if (error instanceof ApiError && error.status === 404)
     return { tone: 'error', text: 'This design is no longer in your library. You can save it again as a new design.', lost: true };
-  if (error instanceof ApiError && error.status === 400) return { tone: 'error', text: 'Fix the values marked on the form, then save again.' };
+  if (error instanceof ApiError && error.status === 400) return { tone: 'error', text: 'Fix the values listed above the form, then save again.' };
   if (error instanceof ApiError && error.status === 401) return { tone: 'error', text: 'You were signed out. Sign in again to save.' };
   return { tone: 'error', text: error instanceof Error ? error.message : 'The design could not be saved.' };
 }
