@@ -42,3 +42,29 @@ describe('the design draft kept in the browser', () => {
     expect(reloaded.currentDocument(reloaded.draftStore.get())).toEqual(step(30));
   });
 });
+
+describe('opening another design over edited work', () => {
+  beforeEach(() => stored.clear());
+
+  it('puts the edited draft aside, and bringing it back restores it with its saved link', async () => {
+    const store = (await loadStore()).draftStore;
+    store.start(step(0), 'saved-1');
+    store.record(step(1));
+    store.start(step(100), 'saved-2');
+    expect(store.replaced()?.history.at(-1)).toEqual(step(1));
+    // Survives a reload too.
+    const reloaded = await loadStore();
+    expect(reloaded.draftStore.replaced()?.savedId).toBe('saved-1');
+    reloaded.draftStore.bringBack();
+    expect(reloaded.currentDocument(reloaded.draftStore.get())).toEqual(step(1));
+    expect(reloaded.draftStore.get()?.savedId).toBe('saved-1');
+    expect(reloaded.draftStore.replaced()).toBeNull();
+  });
+
+  it('puts nothing aside when the draft was never edited', async () => {
+    const store = (await loadStore()).draftStore;
+    store.start(step(0));
+    store.start(step(100));
+    expect(store.replaced()).toBeNull();
+  });
+});

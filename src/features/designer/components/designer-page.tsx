@@ -10,7 +10,7 @@ import { useAccount } from '../../account/api/get-account.ts';
 import { SaveBar } from '../../library/components/save-bar.tsx';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
 import { describeProblem } from '../describe-problem.ts';
-import { currentDocument, draftStore, useDraft } from '../draft-store.ts';
+import { currentDocument, draftStore, useDraft, useReplacedDraft } from '../draft-store.ts';
 import { examples } from '../examples.ts';
 import { ExamplePicker } from './example-picker.tsx';
 import { AirflowPanel } from './airflow-panel.tsx';
@@ -22,6 +22,7 @@ type View = 'wall' | 'bottom' | 'assembled';
 /** The design screen: edit on the left, see the layout, the checks, the air and the print on the right. */
 export function DesignerPage() {
   const draft = useDraft();
+  const putAside = currentDocument(useReplacedDraft());
   const { data: account } = useAccount();
   // A signed-in maker's new designs and examples open in the units of their settings.
   const inPreferredUnits = (document: DesignInput): DesignInput => (account ? { ...document, units: account.units } : document);
@@ -106,6 +107,19 @@ export function DesignerPage() {
           <ExamplePicker onLoad={(document) => replace(designSchema.parse(inPreferredUnits(document)))} />
         </div>
 
+        {putAside && (
+          <div role="status" className="mb-4 flex flex-wrap items-center gap-3 rounded-md border border-ember-600/30 bg-ember-50 px-3 py-2 text-sm">
+            <span>
+              Your earlier work, “{putAside.name}”, was put aside when you opened this design.
+            </span>
+            <button type="button" onClick={() => restore(draftStore.bringBack)} className="min-h-9 rounded-md border border-rule bg-white px-3 font-medium">
+              Bring it back
+            </button>
+            <button type="button" onClick={draftStore.forgetReplaced} className="min-h-9 rounded-md px-2 text-ink-soft underline">
+              Let it go
+            </button>
+          </div>
+        )}
         {!result.ok && (
           <div role="alert" className="mb-4 rounded-md border border-danger/40 bg-danger/5 p-3 text-sm">
             <p className="font-medium">Some values need fixing; until then the preview and checks show the last layout that worked:</p>
