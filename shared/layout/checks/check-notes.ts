@@ -1,5 +1,5 @@
 import type { Finding } from '../layout-types.ts';
-import type { Check } from './check-context.ts';
+import { nameSource, type Check } from './check-context.ts';
 
 /** Side-row positions dropped because they fell in a keep-out: a note, so the count is not a surprise. */
 export const checkDroppedHoles: Check = ({ design, dropped }) => {
@@ -12,7 +12,7 @@ export const checkDroppedHoles: Check = ({ design, dropped }) => {
         rule: 'dropped-in-keep-out',
         severity: row.count - row.skip.length - count === 0 ? 'error' : 'note',
         pieceId: `${part.id}:wall`,
-        message: `${count} of the ${row.count} positions of "${row.label?.trim() || row.id}" fall in a keep-out and are left out${row.count - row.skip.length - count === 0 ? ': the row has no holes left' : ''}.`,
+        message: `${count} of the ${row.count} positions of "${nameSource(design, row.id)}" fall in a keep-out and are left out${row.count - row.skip.length - count === 0 ? ': the row has no holes left' : ''}.`,
         numbers: { dropped: count, positions: row.count },
         holeIds: [],
       });
