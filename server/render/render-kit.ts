@@ -4,8 +4,8 @@ import { validateDesign } from '../../shared/design/index.ts';
 import type { DrawingContext } from '../../shared/drawing/drawing-context.ts';
 import { formatHoleCsv, layoutDesign, type Layout } from '../../shared/layout/index.ts';
 import { drawCalibrationSheet } from '../../shared/print/draw-calibration.ts';
-import { checkImposable, ImpositionError, paperSizes, printOptionsSchema, sheetSize, type PrintOptions } from '../../shared/print/index.ts';
-import { planKit, type KitPlan } from '../../shared/print/plan-kit.ts';
+import { paperSizes, printOptionsSchema, sheetSize, type PrintOptions } from '../../shared/print/index.ts';
+import { planPrintableKit, type KitPlan } from '../../shared/print/plan-kit.ts';
 import { printerScale } from '../../shared/print/printer-profile.ts';
 import { AppError } from '../http/app-error.ts';
 import { createPdfDocument } from './pdf/pdf-writer.ts';
@@ -32,22 +32,13 @@ export function prepareKit(input: RenderRequest, today = new Date()): PreparedKi
   const request = renderRequestSchema.parse(input);
   const design = validDesign(request.design);
   const layout = layoutDesign(design);
-  const tooMany = layout.findings.find((f) => f.rule === 'too-many-holes');
-  if (tooMany) throw new AppError(422, 'TOO_MANY_HOLES', tooMany.message);
-  const problems = checkImposable(layout.pieces, request.print);
-  if (problems.length) throw new AppError(422, 'DOES_NOT_FIT', problems.join(' '));
-  try {
-    const plan = planKit(design, layout, request.print, {
-      version: request.version,
-      date: today.toISOString().slice(0, 10),
-      printer: request.printer ? printerScale(request.printer) : undefined,
-    });
-    return { design, layout, plan, print: request.print };
-  } catch (error) {
-    // The sheet cap and other imposition limits are the request's fault, not the server's.
-    if (error instanceof ImpositionError) throw new AppError(422, 'DOES_NOT_FIT', error.message);
-    throw error;
-  }
+  const kit = planPrintableKit(design, layout, request.print, {
+    version: request.version,
+    date: today.toISOString().slice(0, 10),
+    printer: request.printer ? printerScale(request.printer) : undefined,
+  });
+  if (!kit.ok) throw new AppError(422, kit.code, kit.message);
+  return { design, layout, plan: kit.plan, print: request.print };
 }
 
 export async function renderKitPdf(input: RenderRequest, today?: Date): Promise<{ bytes: Uint8Array; sheets: number; fileName: string }> {

@@ -1,4 +1,5 @@
 import type { Design } from '../design/design-schema.ts';
+import { nameSource } from '../design/name-source.ts';
 import type { Layout } from '../layout/layout-types.ts';
 import { describeDrill, describeLength, type KitText } from './kit-text.ts';
 
@@ -53,11 +54,10 @@ export function buildSheetContent(design: Design, layout: Layout, pilots: Readon
       const bySource = new Map<string, Layout['holes']>();
       for (const hole of layout.holes) if (partOf.get(hole.pieceId) === part.id) bySource.set(hole.sourceId, [...(bySource.get(hole.sourceId) ?? []), hole]);
       if (bySource.size === 0) return [];
-      const sources = [...part.sideRows, ...part.endPatterns];
       const groups = [...bySource].map(([sourceId, group]): BuildSheetHoleGroup => {
         const first = group[0]!;
         const pilot = pilots.get(first.drillId);
-        return { label: sources.find((r) => r.id === sourceId)?.label?.trim() || sourceId, count: group.length, drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
+        return { label: nameSource(design, sourceId), count: group.length, drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
       });
       return [{ part: part.name ?? part.role, groups }];
     }),

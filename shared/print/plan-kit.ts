@@ -6,7 +6,7 @@ import { buildSheetContent, type BuildSheetContent } from './build-sheet.ts';
 import { drawBuildSheet } from './draw-build-sheet.ts';
 import { drawKitSheet } from './draw-kit.ts';
 import type { KitInfo } from './draw-furniture.ts';
-import { imposePieces } from './impose.ts';
+import { checkImposable, imposePieces, ImpositionError } from './impose.ts';
 import type { Imposition } from './imposition-types.ts';
 import type { PrintOptions } from './paper.ts';
 import { kitText } from './kit-text.ts';
@@ -78,4 +78,25 @@ function pilotsFor(design: Design, layout: Layout): Map<string, string> {
     if (pilot) pilots.set(hole.drillId, pilot.label);
   }
   return pilots;
+}
+
+export type PrintableKit = { ok: true; plan: KitPlan } | { ok: false; code: 'TOO_MANY_HOLES' | 'NO_HOLES' | 'DOES_NOT_FIT'; message: string };
+
+/**
+ * planKit behind the refusals every caller needs, in the same words for the server's 422 and
+ * the print screen: too many holes, nothing to drill, pieces that do not fit the paper or the
+ * sheet cap.
+ */
+export function planPrintableKit(design: Design, layout: Layout, options: PrintOptions, meta: { version: string; date: string; printer?: PrinterScale }): PrintableKit {
+  const tooMany = layout.findings.find((f) => f.rule === 'too-many-holes');
+  if (tooMany) return { ok: false, code: 'TOO_MANY_HOLES', message: tooMany.message };
+  if (layout.holes.length === 0) return { ok: false, code: 'NO_HOLES', message: 'This design has no holes to print yet: add a row round the wall or rings on the bottom.' };
+  const problems = checkImposable(layout.pieces, options);
+  if (problems.length) return { ok: false, code: 'DOES_NOT_FIT', message: problems.join(' ') };
+  try {
+    return { ok: true, plan: planKit(design, layout, options, meta) };
+  } catch (error) {
+    if (error instanceof ImpositionError) return { ok: false, code: 'DOES_NOT_FIT', message: error.message };
+    throw error;
+  }
 }

@@ -59,6 +59,11 @@ describe('POST /api/render/pdf', () => {
     const tooMany = await post('/api/render/pdf', { design: crowded });
     expect(tooMany.status).toBe(422);
     expect((await tooMany.json()).error.code).toBe('TOO_MANY_HOLES');
+    const bare = structuredClone(pint);
+    for (const part of bare.parts) Object.assign(part, { sideRows: [], endPatterns: [] });
+    const nothing = await post('/api/render/pdf', { design: bare });
+    expect(nothing.status).toBe(422);
+    expect((await nothing.json()).error.code).toBe('NO_HOLES');
   });
 });
 

@@ -30,12 +30,3 @@ export class FindingGroups {
 }
 
 export const mm = (value: number) => Math.round(value * 100) / 100;
-
-/** What the maker calls a row or ring pattern (its label on the form), else its id. */
-export function nameSource(design: Design, sourceId: string): string {
-  for (const part of design.parts) {
-    const source = [...part.sideRows, ...part.endPatterns].find((s) => s.id === sourceId);
-    if (source) return source.label?.trim() || sourceId;
-  }
-  return sourceId;
-}

@@ -1,6 +1,7 @@
 import type { Hole } from '../layout-types.ts';
 import { angularDistanceDeg } from '../angles.ts';
-import { FindingGroups, mm, nameSource, type Check } from './check-context.ts';
+import { FindingGroups, mm, type Check } from './check-context.ts';
+import { nameSource } from '../../design/name-source.ts';
 
 /**
  * Holes off the part (error) or too close to its edges (warning): the top edge and the bottom

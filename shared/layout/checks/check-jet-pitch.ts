@@ -1,6 +1,7 @@
 import type { Hole } from '../layout-types.ts';
 import { normalizeDeg } from '../angles.ts';
-import { mm, nameSource, type Check } from './check-context.ts';
+import { mm, type Check } from './check-context.ts';
+import { nameSource } from '../../design/name-source.ts';
 
 /**
  * Secondary jets must sit close enough for their flames to join into one ring: warn above the

@@ -1,5 +1,6 @@
 import type { Finding } from '../layout-types.ts';
-import { nameSource, type Check } from './check-context.ts';
+import type { Check } from './check-context.ts';
+import { nameSource } from '../../design/name-source.ts';
 
 /** Side-row positions dropped because they fell in a keep-out: a note, so the count is not a surprise. */
 export const checkDroppedHoles: Check = ({ design, dropped }) => {

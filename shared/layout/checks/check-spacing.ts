@@ -1,6 +1,7 @@
 import type { Hole } from '../layout-types.ts';
 import type { Design } from '../../design/design-schema.ts';
-import { FindingGroups, mm, nameSource, type Check } from './check-context.ts';
+import { FindingGroups, mm, type Check } from './check-context.ts';
+import { nameSource } from '../../design/name-source.ts';
 
 /**
  * Holes that overlap (error) and ligaments, the metal left between hole edges, thinner than the
