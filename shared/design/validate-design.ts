@@ -1,9 +1,45 @@
 import { findDrill } from '../drills/index.ts';
 import { designSchema, type Design } from './design-schema.ts';
 
+/** What was wrong, as data, so each screen can say it in its own words and units. */
+export interface ProblemDetail {
+  code: string;
+  minimum?: number;
+  maximum?: number;
+  inclusive?: boolean;
+  /** number, string or array, for limits. */
+  origin?: string;
+  /** The type expected: number, int, string... */
+  expected?: string;
+  /** Unknown keys, or the allowed values. */
+  keys?: string[];
+  values?: unknown[];
+  /** Missing rather than wrong. */
+  missing?: boolean;
+}
+
 export interface DesignProblem {
   path: string;
+  /** The validator's own text, for logs and programs; people get describeProblem's words. */
   message: string;
+  detail?: ProblemDetail;
+}
+
+type Issue = { code: string; path: PropertyKey[]; message: string } & Record<string, unknown>;
+
+function detailOf(issue: Issue): ProblemDetail {
+  const num = (key: string) => (typeof issue[key] === 'number' ? (issue[key] as number) : typeof issue[key] === 'bigint' ? Number(issue[key]) : undefined);
+  return {
+    code: issue.code,
+    minimum: num('minimum'),
+    maximum: num('maximum'),
+    inclusive: typeof issue.inclusive === 'boolean' ? issue.inclusive : undefined,
+    origin: typeof issue.origin === 'string' ? issue.origin : undefined,
+    expected: typeof issue.expected === 'string' ? issue.expected : undefined,
+    keys: Array.isArray(issue.keys) ? issue.keys.map(String) : undefined,
+    values: Array.isArray(issue.values) ? issue.values : issue.code === 'invalid_union' && Array.isArray(issue.options) ? issue.options : undefined,
+    missing: issue.code === 'invalid_type' && / received undefined$/.test(issue.message),
+  };
 }
 
 export type DesignValidation = { ok: true; design: Design } | { ok: false; problems: DesignProblem[] };
@@ -12,7 +48,7 @@ export type DesignValidation = { ok: true; design: Design } | { ok: false; probl
 export function validateDesign(input: unknown): DesignValidation {
   const result = designSchema.safeParse(input);
   if (!result.success) {
-    return { ok: false, problems: result.error.issues.map((issue) => ({ path: issue.path.join('.') || '(design)', message: issue.message })) };
+    return { ok: false, problems: result.error.issues.map((issue) => ({ path: issue.path.join('.') || '(design)', message: issue.message, detail: detailOf(issue as unknown as Issue) })) };
   }
   const problems = findCrossFieldProblems(result.data);
   return problems.length ? { ok: false, problems } : { ok: true, design: result.data };
@@ -23,21 +59,21 @@ function findCrossFieldProblems(design: Design): DesignProblem[] {
   const problems: DesignProblem[] = [];
   const partIds = new Set<string>();
   design.parts.forEach((part, p) => {
-    if (partIds.has(part.id)) problems.push({ path: `parts.${p}.id`, message: `Part id "${part.id}" is used twice` });
+    if (partIds.has(part.id)) problems.push({ path: `parts.${p}.id`, message: `the id "${part.id}" is used by two parts` });
     partIds.add(part.id);
     const groupIds = new Set<string>();
     const checkId = (rowId: string, path: string) => {
-      if (groupIds.has(rowId)) problems.push({ path, message: `Id "${rowId}" is used twice in part "${part.id}"` });
+      if (groupIds.has(rowId)) problems.push({ path, message: `the id "${rowId}" is used twice in this part` });
       groupIds.add(rowId);
     };
     const checkDrill = (drillId: string, path: string) => {
-      if (!findDrill(drillId)) problems.push({ path, message: `Unknown drill "${drillId}"; use ids such as frac:1/4, num:7, let:F or mm:4.8` });
+      if (!findDrill(drillId)) problems.push({ path, message: `"${drillId}" is not a drill Canwright knows; choose one from the list` });
     };
     part.sideRows.forEach((row, r) => {
       checkId(row.id, `parts.${p}.sideRows.${r}.id`);
       checkDrill(row.drillId, `parts.${p}.sideRows.${r}.drillId`);
       row.skip.forEach((position, s) => {
-        if (position >= row.count) problems.push({ path: `parts.${p}.sideRows.${r}.skip.${s}`, message: `Position ${position} does not exist in a row of ${row.count}` });
+        if (position >= row.count) problems.push({ path: `parts.${p}.sideRows.${r}.skip.${s}`, message: `position ${position + 1} is left out, but the row has only ${row.count} positions` });
       });
     });
     part.endPatterns.forEach((pattern, e) => {
@@ -46,10 +82,14 @@ function findCrossFieldProblems(design: Design): DesignProblem[] {
     });
   });
   design.drillSet.drillIds.forEach((drillId, d) => {
-    if (!findDrill(drillId)) problems.push({ path: `drillSet.drillIds.${d}`, message: `Unknown drill "${drillId}"` });
+    if (!findDrill(drillId)) problems.push({ path: `drillSet.drillIds.${d}`, message: `"${drillId}" is not a drill Canwright knows` });
+  });
+  design.parts.forEach((part, p) => {
+    // The flat of the bottom must be left: a rim as wide as the can's radius leaves no bottom to drill.
+    if (2 * part.vessel.bottomRimInsetMm >= part.vessel.outerDiameterMm) problems.push({ path: `parts.${p}.vessel.bottomRimInsetMm`, message: 'leaves no flat bottom: it must be less than half the diameter' });
   });
   if (design.rules.jetPitchErrorMm < design.rules.jetPitchWarnMm) {
-    problems.push({ path: 'rules.jetPitchErrorMm', message: 'The error limit for jet pitch must not be below the warning limit' });
+    problems.push({ path: 'rules.jetPitchErrorMm', message: 'must not be below the warning limit' });
   }
   return problems;
 }

@@ -5,6 +5,7 @@ export {
   DEFAULT_WALL_THICKNESS_MM,
   usableBottomDiameterMm,
   vesselSchema,
+  VESSEL_LIMITS,
   wrapStripLengthMm,
   type Vessel,
   type VesselInput,
@@ -13,3 +14,4 @@ export { vesselFromCircumference, vesselFromDiameter, type CircumferenceMeasurem
 export { catalogueEntrySchema, parseCatalogue, type CatalogueEntry } from './catalogue-entry.ts';
 export { parseSizeQuery, type SizeQuery } from './size-query.ts';
 export { findCatalogueVessel, searchCatalogue, vesselCatalogue, vesselFromCatalogue } from './catalogue.ts';
+export { diameterFromCircumference, editVessel } from './edit-vessel.ts';
