@@ -1,5 +1,5 @@
 import type { Hole } from '../layout-types.ts';
-import { normalizeDeg } from '../angles.ts';
+import { findWidestGap, gapOnWallMm } from '../widest-gap.ts';
 import { mm, type Check } from './check-context.ts';
 import { nameSource } from '../../design/name-source.ts';
 
@@ -8,9 +8,6 @@ import { nameSource } from '../../design/name-source.ts';
  * design's warning pitch, error above its error pitch (defaults 5/8 in and 3/4 in: common
  * practice, no source). A keep-out gap counts as a pitch too: the ring breaks there.
  */
-/** Marks on a taped paper strip are good to about 0.1 mm; a limit in inch fractions is no finer. */
-const MARK_TOLERANCE_MM = 0.1;
-
 export const checkJetPitch: Check = ({ design, pieces, holesByPiece }) => {
   const { jetPitchWarnMm, jetPitchErrorMm } = design.rules;
   const findings = [];
@@ -24,15 +21,12 @@ export const checkJetPitch: Check = ({ design, pieces, holesByPiece }) => {
     for (const [rowId, holes] of rows) {
       if (holes.length < 2) continue;
       const sorted = [...holes].sort((a, b) => a.angleDeg - b.angleDeg);
-      let widest = { gapDeg: -1, from: sorted[0]!, to: sorted[0]! };
-      sorted.forEach((hole, i) => {
-        const next = sorted[(i + 1) % sorted.length]!;
-        const gapDeg = i + 1 < sorted.length ? next.angleDeg - hole.angleDeg : normalizeDeg(next.angleDeg - hole.angleDeg) || 360;
-        if (gapDeg > widest.gapDeg) widest = { gapDeg, from: hole, to: next };
-      });
-      const pitchMm = (widest.gapDeg / 360) * Math.PI * piece.vesselDiameterMm;
-      if (pitchMm <= jetPitchWarnMm + MARK_TOLERANCE_MM) continue;
-      const error = pitchMm > jetPitchErrorMm + MARK_TOLERANCE_MM;
+      const gap = findWidestGap(sorted.map((h) => h.angleDeg));
+      const widest = { from: sorted[gap.from]!, to: sorted[gap.to]! };
+      const pitchMm = gapOnWallMm(gap.gapDeg, piece.vesselDiameterMm);
+      // The limits apply exactly as the design states them: no allowance is added.
+      if (pitchMm <= jetPitchWarnMm) continue;
+      const error = pitchMm > jetPitchErrorMm;
       findings.push({
         rule: 'jet-pitch',
         severity: error ? ('error' as const) : ('warning' as const),

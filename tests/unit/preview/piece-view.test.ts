@@ -99,8 +99,11 @@ describe('flaggedHoleIds', () => {
     const expected = new Set(sparse.findings.filter((f) => f.severity === 'error' || f.severity === 'warning').flatMap((f) => f.holeIds));
     expect(flagged).toEqual(expected);
     expect(flagged.size).toBeGreaterThan(0);
-    // The pint can stove carries one note and nothing else (templates.test.ts: no errors).
-    expect(flaggedHoleIds(pint).size).toBe(0);
+    // The metric tin stove carries one note and nothing else (templates.test.ts: no errors).
+    expect(flaggedHoleIds(loadTemplate('metric-tin-stove')).size).toBe(0);
+    // The pint stove's 16 jets sit pi x 80.9625 / 16 = 15.897 mm apart, just over the 5/8 in
+    // (15.875 mm) warning: the warning names the two holes of the widest gap.
+    expect(flaggedHoleIds(pint).size).toBe(2);
   });
 
   it('draws flagged holes in the accent colour', () => {

@@ -24,7 +24,8 @@ describe('preview scenes', () => {
 
   it('names what it shows for screen readers', () => {
     // pint-can-stove.json: two rows of 16 on the chamber wall; 1 + 4 + 8 + 16 holes in the bottom (divider rings from 4).
-    expect(planScene(pint, 'in', 'wall').label).toBe('Wall strip of Burn chamber, 32 holes');
+    // The jet-pitch warning (16 jets 15.897 mm apart, limit 15.875 mm) flags the two holes of the widest gap.
+    expect(planScene(pint, 'in', 'wall').label).toBe('Wall strip of Burn chamber, 32 holes, 2 flagged by the checks');
     expect(planScene(pint, 'in', 'bottom').label).toBe('Bottom disc of Burn chamber, 29 holes');
     expect(planScene(pint, 'in', 'assembled').label).toMatch(/^Assembled view of Burn chamber from the side, \d+ of 32 wall holes in view$/);
   });
