@@ -13,6 +13,11 @@ export const DESIGN_SCHEMA_VERSION = 1;
 /** Hard caps: beyond these a request is an error, not a long wait. */
 export const MAX_HOLES = 2000;
 export const MAX_HOLES_PER_ROW = 720;
+export const MAX_PARTS = 6;
+export const MAX_SIDE_ROWS = 12;
+export const MAX_END_PATTERNS = 4;
+export const MAX_KEEP_OUTS = 12;
+export const MAX_EXPLICIT_RINGS = 20;
 
 const id = z.string().trim().min(1).max(60);
 const label = z.string().trim().max(80);
@@ -39,7 +44,7 @@ export const sideRowSchema = z.object({
   /** Height of the hole centres, from the bottom edge or below the top edge. */
   height: z.object({ from: z.enum(['bottom', 'top']), mm: z.number().min(0).max(1000) }),
   startDeg: angleDeg.default(0),
-  keepOuts: z.array(keepOutSchema).max(12).default([]),
+  keepOuts: z.array(keepOutSchema).max(MAX_KEEP_OUTS).default([]),
   /** drop: holes inside a keep-out are left out; respace: all `count` holes share the free arc. */
   keepOutPolicy: z.enum(['drop', 'respace']).default('drop'),
 });
@@ -70,7 +75,7 @@ export const ringPlanSchema = z.discriminatedUnion('strategy', [
     firstRadiusMm: z.number().positive().max(400),
     ringSpacingMm: z.number().positive().max(400),
   }),
-  z.object({ strategy: z.literal('explicit'), rings: z.array(explicitRingSchema).max(20) }),
+  z.object({ strategy: z.literal('explicit'), rings: z.array(explicitRingSchema).max(MAX_EXPLICIT_RINGS) }),
 ]);
 export type RingPlan = z.infer<typeof ringPlanSchema>;
 
@@ -97,12 +102,13 @@ export const partSchema = z.object({
   role: partRoleSchema,
   name: label.optional(),
   vessel: vesselSchema,
-  sideRows: z.array(sideRowSchema).max(12).default([]),
-  endPatterns: z.array(endPatternSchema).max(4).default([]),
+  sideRows: z.array(sideRowSchema).max(MAX_SIDE_ROWS).default([]),
+  endPatterns: z.array(endPatternSchema).max(MAX_END_PATTERNS).default([]),
   /** Concentrator only: diameter of the opening the flame passes through. */
   openingDiameterMm: z.number().positive().max(600).optional(),
 });
 export type Part = z.infer<typeof partSchema>;
+export type PartInput = z.input<typeof partSchema>;
 
 /**
  * Limits the checks use; every default is a rule of thumb (common practice, no source): 3 mm of
@@ -131,12 +137,15 @@ export const designSchema = z.object({
   drillSet: z.object({ name: label.default('My drills'), drillIds: z.array(drillId).max(400) }).default({ name: 'Every drill', drillIds: [] }),
   airflow: z
     .object({
-      /** Primary : secondary open area (common practice 5 : 1, no source; published figures disagree). */
-      targetRatio: z.number().positive().max(50).default(5),
+      /**
+       * Primary : secondary open area (common practice 5 : 1, no source; published figures disagree).
+       * Under 0.5 : 1 no stove draws its jets (common practice, no source).
+       */
+      targetRatio: z.number().min(0.5).max(50).default(5),
     })
     .default({ targetRatio: 5 }),
   rules: rulesSchema.default(rulesSchema.parse({})),
-  parts: z.array(partSchema).min(1).max(6),
+  parts: z.array(partSchema).min(1).max(MAX_PARTS),
 });
 export type Design = z.output<typeof designSchema>;
 export type DesignInput = z.input<typeof designSchema>;
