@@ -1,5 +1,6 @@
 import type { Design } from '../../shared/design/design-schema.ts';
 import type { DesignDetail, VersionDetail, VersionList } from '../../shared/library/library-schemas.ts';
+import { sameDocument } from '../../shared/library/same-document.ts';
 import { summarizeDesign } from '../../shared/library/summarize-design.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import type { DesignQueries, DesignRepository, VersionContent } from './design-repository.ts';
@@ -33,7 +34,14 @@ export function createDesignVersionUseCases(designs: DesignRepository) {
     /** The document passed validateDesign already; its summary comes from a fresh layout. */
     saveVersion(ownerId: string, id: string, input: { document: Design; note?: string }): Promise<DesignDetail> {
       const summary = summarizeDesign(input.document);
-      return appendVersion(ownerId, id, async () => ({ document: input.document, summary, note: input.note ?? null }));
+      return appendVersion(ownerId, id, async (queries) => {
+        // A version that changes nothing would only bury the ones that did.
+        const current = await queries.find(ownerId, id);
+        if (current && sameDocument(current.document, input.document)) {
+          throw new AppError(409, 'NO_CHANGE', `Nothing has changed since version ${current.design.currentVersion}, so no new version was made.`);
+        }
+        return { document: input.document, summary, note: input.note ?? null };
+      });
     },
 
     async listVersions(ownerId: string, id: string): Promise<VersionList> {
