@@ -1,8 +1,9 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { Link, NavLink, Outlet, useNavigate } from 'react-router';
+import { Link, NavLink, Outlet, ScrollRestoration, useNavigate } from 'react-router';
 import { SafetyNote } from '../components/safety-note.tsx';
 import { accountQueryKey, useAccount } from '../features/account/api/get-account.ts';
 import { useAppInfo } from '../features/app-info/api/get-app-info.ts';
+import { useDraftFollowsAccount } from '../features/designer/use-draft-follows-account.ts';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `rounded-md px-3 py-2 text-sm font-medium ${isActive ? 'bg-ember-50 text-ember-700' : 'text-ink hover:bg-ember-50'}`;
@@ -12,6 +13,7 @@ export function Layout() {
   const { data: appInfo } = useAppInfo();
   const queryClient = useQueryClient();
   const navigate = useNavigate();
+  useDraftFollowsAccount();
 
   async function signOut() {
     const { authClient } = await import('../lib/auth-client.ts');
@@ -23,6 +25,8 @@ export function Layout() {
 
   return (
     <div className="flex min-h-screen flex-col">
+      {/* A new page starts at its top; back and forward return to where the reader was. */}
+      <ScrollRestoration />
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-3 focus:py-2">
         Skip to content
       </a>

@@ -41,8 +41,8 @@ describe.skipIf(skip)('a maker saves, versions, restores and shares a design', (
     await signIn(page, server, maker, '/design');
     await page.getByRole('heading', { name: 'Design a stove' }).waitFor();
     expect(await page.getByLabel('Design name').inputValue()).toBe(PINT_NAME);
-    await page.getByRole('button', { name: 'Save to library' }).click();
-    await page.getByText(`Saved “${PINT_NAME}” to your library.`).waitFor();
+    await page.getByRole('button', { name: 'Save as new design' }).click();
+    await page.getByText(`Saved “${PINT_NAME}” to your library as a new design.`).waitFor();
     await page.getByRole('button', { name: 'Save new version' }).waitFor();
     await page.screenshot({ path: artifactPath('library-save-bar-1280.png') });
   });

@@ -1,11 +1,13 @@
 import { useState } from 'react';
+import { useFormContext } from 'react-hook-form';
 import { applyPrimarySplit, proposePrimarySplits, type PrimarySplit } from '../../../../shared/airflow/index.ts';
-import type { Design } from '../../../../shared/design/design-schema.ts';
+import type { Design, DesignInput } from '../../../../shared/design/design-schema.ts';
 import type { Layout } from '../../../../shared/layout/index.ts';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
 import { Button } from '../../../components/button.tsx';
-import { useAccount } from '../../account/api/get-account.ts';
-import { DrillOptions, drillChoices } from './drill-options.tsx';
+import { useProblem } from '../design-problems.tsx';
+import { DrillOptions, useDrillChoices } from './drill-options.tsx';
+import { JetSolver } from './jet-solver.tsx';
 
 const groupNames = { primary: 'Primary air', secondary: 'Secondary air (jets)', intake: 'Shell intake', other: 'Other holes' } as const;
 
@@ -14,10 +16,23 @@ function area(mm2: number, units: UnitSystem): string {
   return units === 'in' ? `${(mm2 / 645.16).toFixed(3)} sq in` : `${Math.round(mm2)} mm²`;
 }
 
-export function AirflowPanel({ design, layout, units, onTargetChange, onApply }: { design: Design; layout: Layout; units: UnitSystem; onTargetChange(ratio: number): void; onApply(next: Design): void }) {
+/** "5.0 : 1", the one way a ratio is written on screen and on paper. */
+export const formatRatio = (ratio: number | null) => (ratio === null ? '–' : `${ratio.toFixed(1)} : 1`);
+
+interface AirflowPanelProps {
+  design: Design;
+  layout: Layout;
+  units: UnitSystem;
+  stale: boolean;
+  onApply(next: Design): void;
+}
+
+/** Open areas, the air ratio against its target, and the solvers: primary splits and jet counts. */
+export function AirflowPanel({ design, layout, units, stale, onApply }: AirflowPanelProps) {
+  const { register } = useFormContext<DesignInput>();
+  const targetProblem = useProblem('airflow.targetRatio');
   const chamber = design.parts.find((p) => p.role === 'burn-chamber');
-  const { data: account } = useAccount();
-  const choices = drillChoices(design.drillSet.drillIds, units, account?.drillSetIds);
+  const choices = useDrillChoices(units);
   // Start from the drill the primary holes already use, else the one nearest 1/4 in (6.35 mm).
   const current = design.parts.flatMap((p) => [...p.sideRows, ...p.endPatterns]).find((r) => r.group === 'primary')?.drillId;
   const nearestQuarter = [...choices].sort((a, b) => Math.abs(a.diameterMm - 6.35) - Math.abs(b.diameterMm - 6.35))[0]?.id;
@@ -31,6 +46,7 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
         Air
       </h2>
       <table className="text-sm">
+        <caption className="sr-only">Holes and open area by air group</caption>
         <tbody>
           {layout.groups.map((group) => (
             <tr key={group.group}>
@@ -43,14 +59,22 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
           ))}
         </tbody>
       </table>
-      <p className="text-sm">
-        Primary : secondary = <strong>{ratio === null ? '–' : `${ratio.toFixed(1)} : 1`}</strong>
-        <label className="ml-3 inline-flex items-center gap-1">
+      <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
+        <p aria-live="polite">
+          Primary : secondary = <strong>{formatRatio(ratio)}</strong>
+          {!stale && <span className="sr-only">, target {formatRatio(targetRatio)}</span>}
+        </p>
+        <label className="inline-flex items-center gap-1">
           target
-          <TargetRatioInput value={targetRatio} onChange={onTargetChange} />
+          <input type="number" step={0.5} min={0.5} max={50} {...register('airflow.targetRatio', { valueAsNumber: true })} aria-invalid={targetProblem ? true : undefined} aria-describedby={targetProblem ? 'target-ratio-error' : undefined} className="w-16 rounded border border-rule px-1 aria-[invalid]:border-danger" aria-label="Target primary to secondary ratio" />
           : 1
         </label>
-      </p>
+        {targetProblem && (
+          <span id="target-ratio-error" className="text-xs text-danger">
+            Target ratio: {targetProblem}
+          </span>
+        )}
+      </div>
       {chamber && (
         <div className="flex flex-col gap-2 rounded-md border border-rule bg-white p-3">
           <div className="flex flex-wrap items-end gap-2">
@@ -60,7 +84,7 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
                 <DrillOptions choices={choices} current={drillId} />
               </select>
             </label>
-            <Button variant="secondary" onClick={() => setSplits(proposePrimarySplits(design, { partId: chamber.id, drillId }))}>
+            <Button variant="secondary" disabled={stale} onClick={() => setSplits(proposePrimarySplits(design, { partId: chamber.id, drillId }))}>
               Suggest primary holes
             </Button>
           </div>
@@ -70,10 +94,10 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
               {splits.map((split) => (
                 <li key={split.description} className="flex items-center justify-between gap-2">
                   <span>
-                    {split.description} · {split.totalHoles} holes · {split.ratio.toFixed(2)} : 1
+                    {split.description} · {split.totalHoles} holes · {formatRatio(split.ratio)}
                   </span>
-                  <Button variant="secondary" onClick={() => (onApply(applyPrimarySplit(design, chamber.id, split)), setSplits(null))}>
-                    Apply
+                  <Button variant="secondary" disabled={stale} onClick={() => (onApply(applyPrimarySplit(design, chamber.id, split)), setSplits(null))}>
+                    Apply<span className="sr-only">: {split.description}</span>
                   </Button>
                 </li>
               ))}
@@ -81,51 +105,7 @@ export function AirflowPanel({ design, layout, units, onTargetChange, onApply }:
           )}
         </div>
       )}
+      <JetSolver design={design} units={units} stale={stale} />
     </section>
-  );
-}
-
-/** The schema caps the target at 50 (shared/design/design-schema.ts); under 0.5 : 1 no stove draws its jets (common practice, no source). */
-const TARGET_MIN = 0.5;
-const TARGET_MAX = 50;
-
-/**
- * The target ratio as typed: only a number in range reaches the design, so a half-typed "54" can
- * never make the design invalid (which would hide this very box); out of range shows why instead.
- */
-function TargetRatioInput({ value, onChange }: { value: number; onChange(ratio: number): void }) {
-  const [text, setText] = useState(String(value));
-  const [lastValue, setLastValue] = useState(value);
-  if (value !== lastValue) {
-    setLastValue(value);
-    setText(String(value));
-  }
-  const typed = Number(text);
-  const inRange = text.trim() !== '' && typed >= TARGET_MIN && typed <= TARGET_MAX;
-  return (
-    <>
-      <input
-        type="number"
-        min={TARGET_MIN}
-        max={TARGET_MAX}
-        step={0.5}
-        value={text}
-        onChange={(e) => {
-          setText(e.target.value);
-          const next = e.target.valueAsNumber;
-          if (next >= TARGET_MIN && next <= TARGET_MAX) onChange(next);
-        }}
-        onBlur={() => !inRange && setText(String(value))}
-        aria-invalid={inRange ? undefined : true}
-        aria-describedby={inRange ? undefined : 'target-ratio-error'}
-        className="w-16 rounded border border-rule px-1 aria-[invalid]:border-danger"
-        aria-label="Target primary to secondary ratio"
-      />
-      {!inRange && (
-        <span id="target-ratio-error" className="text-xs text-danger">
-          from {TARGET_MIN} to {TARGET_MAX}
-        </span>
-      )}
-    </>
   );
 }

@@ -5,7 +5,8 @@ import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
 import { Page } from '../../../components/page.tsx';
 import { ApiError } from '../../../lib/api-client.ts';
-import { draftStore } from '../../designer/draft-store.ts';
+import { useAccount } from '../../account/api/get-account.ts';
+import { openDesign } from '../../designer/open-design.ts';
 import { useDesign } from '../api/get-design.ts';
 import { useVersions } from '../api/get-versions.ts';
 import { useRestoreVersion } from '../api/restore-version.ts';
@@ -24,6 +25,7 @@ const backLink = (
 export function DesignHistoryPage() {
   const id = useParams().id ?? '';
   const navigate = useNavigate();
+  const { data: account } = useAccount();
   const design = useDesign(id);
   const versions = useVersions(id);
   const restore = useRestoreVersion();
@@ -54,7 +56,7 @@ export function DesignHistoryPage() {
   }
 
   async function openInDesigner(current: DesignDetail) {
-    draftStore.start(structuredClone(current.document), current.id);
+    openDesign(current.document, { savedId: current.id, accountId: account?.id, reason: `opened “${current.name}” from your library` });
     await navigate('/design');
   }
 

@@ -2,7 +2,8 @@ import { useQueryClient } from '@tanstack/react-query';
 import { createContext, useContext, useId, useState } from 'react';
 import { useNavigate } from 'react-router';
 import type { DesignListItem } from '../../../../shared/library/library-schemas.ts';
-import { draftStore } from '../../designer/draft-store.ts';
+import { useAccount } from '../../account/api/get-account.ts';
+import { openDesign } from '../../designer/open-design.ts';
 import { useDeleteDesign } from '../api/delete-design.ts';
 import { designQueryOptions } from '../api/get-design.ts';
 import { useDuplicateDesign } from '../api/duplicate-design.ts';
@@ -31,6 +32,7 @@ export function useDesignRowActions(design: DesignListItem): DesignRowActions {
   const nameId = useId();
   const navigate = useNavigate();
   const queryClient = useQueryClient();
+  const { data: account } = useAccount();
   const update = useUpdateDesign();
   const duplicate = useDuplicateDesign();
   const remove = useDeleteDesign();
@@ -59,7 +61,7 @@ export function useDesignRowActions(design: DesignListItem): DesignRowActions {
     open: () =>
       run(async () => {
         const detail = await queryClient.fetchQuery(designQueryOptions(design.id));
-        draftStore.start(structuredClone(detail.document), design.id);
+        openDesign(detail.document, { savedId: design.id, accountId: account?.id, reason: `opened “${detail.name}” from your library` });
         await navigate('/design');
       }),
     rename: (name) =>

@@ -3,6 +3,8 @@ import { Link } from 'react-router';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import { Page } from '../../../components/page.tsx';
 import { useAccount } from '../../account/api/get-account.ts';
+import { describeProblem } from '../../../../shared/design/describe-problem.ts';
+import { validateDesign } from '../../../../shared/design/validate-design.ts';
 import { currentDocument, useDraft } from '../../designer/draft-store.ts';
 import { designQueryOptions } from '../../library/api/get-design.ts';
 import { PrintWorkspace } from './print-workspace.tsx';
@@ -12,6 +14,29 @@ export function PrintPage() {
   const draft = useDraft();
   const design = currentDocument(draft);
   const version = useVersionLabel(draft?.savedId, design);
+  const working = draft?.working;
+  const problems = working ? validateDesign(working) : undefined;
+  if (working && problems && !problems.ok) {
+    // A kit is printed from values that all check out, never from the last good step behind the maker's back.
+    return (
+      <Page title="Print the kit" width="wide" intro={<span className="font-medium text-ink">{working.name || 'Untitled design'}</span>}>
+        <div role="alert" className="rounded-md border border-danger/40 bg-danger/5 p-4 text-sm">
+          <p className="font-medium">This design has values to fix before it can print:</p>
+          <ul className="mt-1 list-disc pl-5">
+            {problems.problems.slice(0, 8).map((p) => (
+              <li key={p.path}>{describeProblem(working, p)}</li>
+            ))}
+          </ul>
+          <p className="mt-2">The kit would not match what is on the design screen, so nothing prints until they are fixed.</p>
+        </div>
+        <p className="mt-4">
+          <Link to="/design" className="text-ember-700 underline">
+            Back to the design to fix them
+          </Link>
+        </p>
+      </Page>
+    );
+  }
   if (!design) {
     return (
       <Page title="Print the kit">

@@ -4,9 +4,12 @@ import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import { layoutDocument } from '../../../../shared/layout/index.ts';
 import { Button } from '../../../components/button.tsx';
 import { Page } from '../../../components/page.tsx';
+import { Tabs, tabPanelProps, useTabPanel } from '../../../components/tabs.tsx';
 import { ApiError } from '../../../lib/api-client.ts';
 import { PrintWorkspace } from '../../print/components/print-workspace.tsx';
-import { draftStore } from '../../designer/draft-store.ts';
+import { useAccount } from '../../account/api/get-account.ts';
+import { openDesign } from '../../designer/open-design.ts';
+import { formatRatio } from '../../designer/components/airflow-panel.tsx';
 import { LayoutPreview } from '../../preview/components/layout-preview.tsx';
 import type { PreviewView } from '../../preview/preview-scene.ts';
 import { useSharedDesign } from '../api/get-shared-design.ts';
@@ -21,8 +24,10 @@ const views: { id: PreviewView; label: string }[] = [
 export function SharedDesignPage() {
   const token = useParams().token ?? '';
   const navigate = useNavigate();
+  const { data: account } = useAccount();
   const shared = useSharedDesign(token);
   const [view, setView] = useState<PreviewView>('wall');
+  const panelId = useTabPanel();
   const document = shared.data?.document as DesignInput | undefined;
   const result = useMemo(() => (document ? layoutDocument(document) : undefined), [document]);
 
@@ -42,8 +47,8 @@ export function SharedDesignPage() {
   }
 
   async function openCopy(copy: DesignInput) {
-    // Not linked to the owner's library: saving it makes a design of the visitor's own.
-    draftStore.start(structuredClone(copy));
+    // Not bound to the owner's library: saving it makes a design of the visitor's own.
+    openDesign(copy, { accountId: account?.id, reason: `opened a copy of the shared design “${copy.name}”` });
     await navigate('/design');
   }
 
@@ -52,14 +57,8 @@ export function SharedDesignPage() {
     <Page title={shared.data.name} width="wide" intro="A stove design shared with you. Print its drilling templates, or open a copy to change it.">
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1.2fr)_minmax(0,1fr)]">
         <section aria-label="Preview" className="flex flex-col gap-2">
-          <div role="tablist" aria-label="Preview view" className="flex flex-wrap gap-1">
-            {views.map((v) => (
-              <button key={v.id} role="tab" type="button" aria-selected={view === v.id} onClick={() => setView(v.id)} className={`rounded-md px-3 py-1.5 text-sm ${view === v.id ? 'bg-ink text-white' : 'border border-rule bg-white'}`}>
-                {v.label}
-              </button>
-            ))}
-          </div>
-          <div className="h-80 overflow-hidden rounded-lg border border-rule bg-white sm:h-96">
+          <Tabs<PreviewView> label="Preview view" tabs={views} selected={view} onSelect={setView} panelId={panelId} tone="ink" />
+          <div {...tabPanelProps(panelId, view)} className="h-80 overflow-hidden rounded-lg border border-rule bg-white sm:h-96">
             {layout ? <LayoutPreview layout={layout} units={document.units ?? 'in'} view={view} /> : <p className="p-4 text-sm text-ink-soft">This design cannot be laid out.</p>}
           </div>
         </section>
@@ -75,7 +74,7 @@ export function SharedDesignPage() {
               <dt className="font-medium">Holes</dt>
               <dd>{layout.holes.length}</dd>
               <dt className="font-medium">Primary : secondary</dt>
-              <dd>{layout.airflow.ratio === null ? '–' : `${layout.airflow.ratio.toFixed(1)} : 1`}</dd>
+              <dd>{formatRatio(layout.airflow.ratio)}</dd>
             </dl>
           )}
           <div>
