@@ -78,3 +78,18 @@ export async function savePng(
   }
   await writeFile(path, PNG.sync.write(png));
 }
+
+/** The text of every page, items joined by spaces, as pdf.js reads it back from the file. */
+export async function readPdfText(bytes: Uint8Array): Promise<string[]> {
+  const pdf = await openPdf(bytes);
+  try {
+    const pages: string[] = [];
+    for (let n = 1; n <= pdf.numPages; n++) {
+      const content = await (await pdf.getPage(n)).getTextContent();
+      pages.push(content.items.map((item) => ('str' in item ? item.str : '')).join(' ').replace(/\s+/g, ' '));
+    }
+    return pages;
+  } finally {
+    await pdf.destroy();
+  }
+}
