@@ -37,6 +37,18 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     expect(violations, JSON.stringify(violations, null, 1)).toEqual([]);
   });
 
+  it('design page with the view from above and a value that does not validate', async () => {
+    await page.goto(server.url + '/design');
+    await page.getByRole('heading', { name: 'Design a stove', level: 1 }).waitFor();
+    await page.getByRole('tab', { name: 'From above' }).click();
+    await page.getByRole('spinbutton', { name: /^Holes \(positions\)/ }).first().fill('30.5');
+    await page.getByText('Not up to date').first().waitFor();
+    await page.waitForTimeout(300);
+    const violations = await seriousViolations(page);
+    expect(violations, JSON.stringify(violations, null, 1)).toEqual([]);
+    await page.getByRole('spinbutton', { name: /^Holes \(positions\)/ }).first().fill('16');
+  });
+
   it('account page, signed in', async () => {
     const user = await createUser(server);
     await page.goto(`${server.url}/sign-in`);
@@ -82,7 +94,14 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     await page.getByRole('heading', { name: heading, level: 1 }).waitFor();
     await page.waitForTimeout(300);
     // Controls on screen: a control hidden at this width (the phone-only sort menu) cannot take focus.
-    const controls = await page.evaluate(() => [...document.querySelectorAll('main button:not([disabled]), main input, main select, main a[href], main [tabindex="0"]')].filter((el) => el.getClientRects().length > 0).length);
+    // A tab list is one stop in the Tab order (WAI-ARIA Authoring Practices, tabs pattern): its
+    // unselected tabs are reached with the arrow keys, which the next test checks.
+    const controls = await page.evaluate(
+      () =>
+        [...document.querySelectorAll('main button:not([disabled]), main input, main select, main a[href], main [tabindex="0"]')].filter(
+          (el) => el.getClientRects().length > 0 && !(el.getAttribute('role') === 'tab' && el.getAttribute('aria-selected') !== 'true'),
+        ).length,
+    );
     const reached = new Set<string>();
     for (let i = 0; i < controls + 40; i++) {
       await page.keyboard.press('Tab');
@@ -95,5 +114,34 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
       if (key) reached.add(key);
     }
     expect(reached.size).toBeGreaterThanOrEqual(controls);
+  });
+  // WAI-ARIA Authoring Practices, tabs pattern: arrow keys move and select, Home/End jump to the
+  // ends, the selected tab alone is in the Tab order and names the panel it controls.
+  it('moves through the preview view tabs with the arrow keys, Home and End', async () => {
+    await page.goto(server.url + '/design');
+    const tabs = page.getByRole('tablist', { name: 'Preview view' });
+    await tabs.waitFor();
+    const names = await tabs.getByRole('tab').allTextContents();
+    expect(names.length).toBeGreaterThanOrEqual(4);
+    const selected = () => tabs.locator('[role="tab"][aria-selected="true"]');
+    const focusedName = () => page.evaluate(() => document.activeElement?.textContent ?? '');
+    await selected().focus();
+    const first = await selected().textContent();
+    await page.keyboard.press('ArrowRight');
+    expect(await selected().textContent()).toBe(names[(names.indexOf(first!) + 1) % names.length]);
+    expect(await focusedName()).toBe(await selected().textContent());
+    await page.keyboard.press('End');
+    expect(await selected().textContent()).toBe(names.at(-1));
+    await page.keyboard.press('ArrowRight');
+    expect(await selected().textContent()).toBe(names[0]);
+    await page.keyboard.press('ArrowLeft');
+    expect(await selected().textContent()).toBe(names.at(-1));
+    await page.keyboard.press('Home');
+    expect(await selected().textContent()).toBe(names[0]);
+    expect(await tabs.locator('[role="tab"][tabindex="0"]').count()).toBe(1);
+    const panelId = await selected().getAttribute('aria-controls');
+    const panel = page.locator(`[id="${panelId}"]`);
+    expect(await panel.getAttribute('role')).toBe('tabpanel');
+    expect(await panel.getAttribute('aria-labelledby')).toBe(await selected().getAttribute('id'));
   });
 });

@@ -50,7 +50,7 @@ export function PreviewPanel({ design, layout, units, partIndex, view, onView, f
         </button>
       </div>
       {stale && <StaleMark what="The preview" problem={stale} compact />}
-      <div {...tabPanelProps(panelId, view)} hidden={hidden} className={`h-44 overflow-hidden rounded-lg border border-rule bg-white sm:h-80 lg:h-96 ${stale ? 'opacity-70' : ''}`}>
+      <div {...tabPanelProps(panelId, view)} hidden={hidden} className={`h-44 overflow-hidden rounded-lg border border-rule bg-white sm:h-80 lg:h-96 ${stale ? '[&_canvas]:opacity-60 [&_svg]:opacity-60' : ''}`}>
         {view === 'above' ? (
           <PlanView part={part} partName={partName} onSeamChange={onSeamChange} onToggleSkip={onToggleSkip} />
         ) : piece ? (
