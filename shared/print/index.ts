@@ -27,3 +27,4 @@ export { checkImposable, imposePieces, ImpositionError, MAX_SHEETS, PLACEMENT_GA
 export { DISC_LABEL_MM, FOOT_BAND_MM, LABEL_BAND_MM, measurePiece } from './footprint.ts';
 export { countTiles, nameJoin, splitStrip, TILE_OVERLAP_MM } from './tile-strip.ts';
 export { packShelves, type PackedItem, type PackItem } from './pack-shelves.ts';
+export { suggestPaperFix, type PaperFix } from './suggest-paper-fix.ts';
