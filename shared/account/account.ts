@@ -25,8 +25,11 @@ export type AdminUser = z.infer<typeof adminUserSchema>;
 export const adminUserListSchema = z.object({ users: z.array(adminUserSchema), total: z.number().int() });
 export type AdminUserList = z.infer<typeof adminUserListSchema>;
 
+/** The longest search the admin's user list takes. */
+export const ADMIN_SEARCH_MAX = 200;
+
 export const adminUserQuerySchema = z.object({
-  search: z.string().trim().max(200).optional(),
+  search: z.string().trim().max(ADMIN_SEARCH_MAX).optional(),
   limit: z.coerce.number().int().min(1).max(200).default(50),
   offset: z.coerce.number().int().min(0).default(0),
 });

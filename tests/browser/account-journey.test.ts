@@ -107,6 +107,7 @@ describe.skipIf(skip)('account journey in Chromium', () => {
       await adminPage.getByRole('link', { name: 'Users' }).click();
       await adminPage.getByRole('heading', { name: 'Users' }).waitFor();
       await adminPage.getByRole('button', { name: `Disable ${user.name}` }).click();
+      await adminPage.getByRole('group', { name: `Disable ${user.name}?` }).getByRole('button', { name: 'Disable account' }).click();
       await adminPage.getByRole('button', { name: `Enable ${user.name}` }).waitFor();
       await adminPage.screenshot({ path: artifactPath('admin-users-1280.png'), fullPage: true });
 
