@@ -1,6 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { Link, NavLink, Outlet, ScrollRestoration, useNavigate } from 'react-router';
 import { SafetyNote } from '../components/safety-note.tsx';
+import { SignInLink } from '../components/sign-in-link.tsx';
 import { accountQueryKey, useAccount } from '../features/account/api/get-account.ts';
 import { useAppInfo } from '../features/app-info/api/get-app-info.ts';
 import { useDraftFollowsAccount } from '../features/designer/use-draft-follows-account.ts';
@@ -62,9 +63,7 @@ export function Layout() {
               </>
             ) : (
               <>
-                <NavLink to="/sign-in" className={navClass}>
-                  Sign in
-                </NavLink>
+                <SignInLink className={navClass}>Sign in</SignInLink>
                 <NavLink to="/sign-up" className={navClass}>
                   Create account
                 </NavLink>

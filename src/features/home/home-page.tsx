@@ -1,5 +1,6 @@
 import { Link } from 'react-router';
 import { Page } from '../../components/page.tsx';
+import { SignInLink } from '../../components/sign-in-link.tsx';
 import { useAccount } from '../account/api/get-account.ts';
 
 const steps = [
@@ -27,9 +28,7 @@ export function HomePage() {
             <Link to="/sign-up" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
               Create an account
             </Link>
-            <Link to="/sign-in" className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">
-              Sign in
-            </Link>
+            <SignInLink className="rounded-md border border-rule bg-white px-4 py-2 font-medium hover:bg-ember-50">Sign in</SignInLink>
           </>
         )}
       </div>

@@ -11,19 +11,17 @@ import { TextField } from '../../../components/text-field.tsx';
 import { authClient, authErrorMessage } from '../../../lib/auth-client.ts';
 import { accountQueryKey } from '../../account/api/get-account.ts';
 import { signInFormSchema } from '../form-schemas.ts';
+import { safeNextPath, withNext } from '../next-path.ts';
 
 type SignInForm = z.infer<typeof signInFormSchema>;
-
-/** Only same-site paths are followed after sign-in, never another origin. */
-function safeNext(next: string | null): string {
-  return next && next.startsWith('/') && !next.startsWith('//') ? next : '/account';
-}
 
 export function SignInPage() {
   const navigate = useNavigate();
   const queryClient = useQueryClient();
   const [params] = useSearchParams();
   const [failure, setFailure] = useState<string>();
+  // Back to where the person was: only ever a path on this site (see safeNextPath).
+  const next = safeNextPath(params.get('next'));
   const { register, handleSubmit, formState } = useForm<SignInForm>({ resolver: zodResolver(signInFormSchema) });
 
   async function onSubmit(form: SignInForm) {
@@ -31,7 +29,7 @@ export function SignInPage() {
     const { error } = await authClient.signIn.email({ email: form.email, password: form.password });
     if (error) return setFailure(authErrorMessage(error, 'Signing in failed.'));
     await queryClient.invalidateQueries({ queryKey: accountQueryKey });
-    await navigate(safeNext(params.get('next')), { replace: true });
+    await navigate(next ?? '/account', { replace: true });
   }
 
   return (
@@ -48,7 +46,7 @@ export function SignInPage() {
           <Link to="/forgot-password" className="text-ember-700 underline">
             Forgot your password?
           </Link>
-          <Link to="/sign-up" className="text-ember-700 underline">
+          <Link to={withNext('/sign-up', next)} className="text-ember-700 underline">
             Create an account
           </Link>
         </p>

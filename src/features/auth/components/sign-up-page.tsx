@@ -1,28 +1,33 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Link, useNavigate } from 'react-router';
+import { useNavigate, useSearchParams } from 'react-router';
 import type { z } from 'zod';
 import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
 import { Page } from '../../../components/page.tsx';
+import { SignInLink } from '../../../components/sign-in-link.tsx';
 import { TextField } from '../../../components/text-field.tsx';
 import { authClient, authErrorMessage } from '../../../lib/auth-client.ts';
 import { signUpFormSchema } from '../form-schemas.ts';
+import { safeNextPath, withNext } from '../next-path.ts';
 import { verifyCallbackUrl } from '../../../../shared/account/links.ts';
 
 type SignUpForm = z.infer<typeof signUpFormSchema>;
 
 export function SignUpPage() {
   const navigate = useNavigate();
+  const [params] = useSearchParams();
+  // Carried through the confirmation mail to the sign-in page, which goes back there.
+  const next = safeNextPath(params.get('next'));
   const [failure, setFailure] = useState<string>();
   const { register, handleSubmit, formState } = useForm<SignUpForm>({ resolver: zodResolver(signUpFormSchema) });
 
   async function onSubmit(form: SignUpForm) {
     setFailure(undefined);
-    const { error } = await authClient.signUp.email({ name: form.name, email: form.email, password: form.password, callbackURL: verifyCallbackUrl });
+    const { error } = await authClient.signUp.email({ name: form.name, email: form.email, password: form.password, callbackURL: withNext(verifyCallbackUrl, next) });
     if (error) return setFailure(authErrorMessage(error, 'The account could not be created.'));
-    await navigate(`/verify?sent=${encodeURIComponent(form.email)}`);
+    await navigate(withNext(`/verify?sent=${encodeURIComponent(form.email)}`, next));
   }
 
   return (
@@ -38,9 +43,7 @@ export function SignUpPage() {
         </Button>
         <p className="text-sm text-ink-soft">
           Have an account already?{' '}
-          <Link to="/sign-in" className="text-ember-700 underline">
-            Sign in
-          </Link>
+          <SignInLink className="text-ember-700 underline">Sign in</SignInLink>
         </p>
       </form>
     </Page>

@@ -1,14 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Link, useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router';
 import type { z } from 'zod';
 import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
 import { Page } from '../../../components/page.tsx';
+import { SignInLink } from '../../../components/sign-in-link.tsx';
 import { TextField } from '../../../components/text-field.tsx';
 import { authClient, authErrorMessage } from '../../../lib/auth-client.ts';
 import { emailFormSchema } from '../form-schemas.ts';
+import { safeNextPath, withNext } from '../next-path.ts';
 import { verifyCallbackUrl } from '../../../../shared/account/links.ts';
 
 type EmailForm = z.infer<typeof emailFormSchema>;
@@ -28,7 +30,7 @@ export function VerifyPage() {
 
   async function resend(form: EmailForm) {
     setFailure(undefined);
-    const { error: sendError } = await authClient.sendVerificationEmail({ email: form.email, callbackURL: verifyCallbackUrl });
+    const { error: sendError } = await authClient.sendVerificationEmail({ email: form.email, callbackURL: withNext(verifyCallbackUrl, safeNextPath(params.get('next'))) });
     if (sendError) return setFailure(authErrorMessage(sendError, 'The link could not be sent.'));
     setResent(form.email);
   }
@@ -38,9 +40,7 @@ export function VerifyPage() {
       <Page title="E-mail address confirmed">
         <Notice tone="success">Thank you: your address is confirmed and your account is ready.</Notice>
         <p className="mt-4">
-          <Link to="/sign-in" className="font-medium text-ember-700 underline">
-            Sign in
-          </Link>
+          <SignInLink className="font-medium text-ember-700 underline">Sign in</SignInLink>
         </p>
       </Page>
     );

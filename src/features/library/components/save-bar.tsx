@@ -1,10 +1,11 @@
 import { useState } from 'react';
-import { Link, useLocation } from 'react-router';
+import { Link } from 'react-router';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import { validateDesign } from '../../../../shared/design/validate-design.ts';
 import { sameDocument } from '../../../../shared/library/same-document.ts';
 import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
+import { SignInLink } from '../../../components/sign-in-link.tsx';
 import { ApiError } from '../../../lib/api-client.ts';
 import { useAccount } from '../../account/api/get-account.ts';
 import { draftStore, useDraft } from '../../designer/draft-store.ts';
@@ -36,7 +37,6 @@ function describeFailure(error: unknown): Status {
 export function SaveBar({ document, valid }: { document: DesignInput; valid: boolean }) {
   const { data: account } = useAccount();
   const draft = useDraft();
-  const location = useLocation();
   const create = useCreateDesign();
   const save = useSaveVersion();
   const [note, setNote] = useState('');
@@ -49,9 +49,7 @@ export function SaveBar({ document, valid }: { document: DesignInput; valid: boo
   if (account === null)
     return (
       <p className="text-sm">
-        <Link to={`/sign-in?next=${encodeURIComponent(location.pathname)}`} className={linkClass}>
-          Sign in to save
-        </Link>
+        <SignInLink className={linkClass}>Sign in to save</SignInLink>
         <span className="text-ink-soft"> — your work stays here while you do.</span>
       </p>
     );

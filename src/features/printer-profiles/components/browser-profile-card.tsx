@@ -1,4 +1,4 @@
-import { Link } from 'react-router';
+import { SignInLink } from '../../../components/sign-in-link.tsx';
 import { Button } from '../../../components/button.tsx';
 import { forgetBrowserProfile, useBrowserProfile } from '../browser-profile.ts';
 import { ProfileMeasurements } from './profile-measurements.tsx';
@@ -23,9 +23,7 @@ export function BrowserProfileCard() {
       </div>
       <p className="text-sm text-ink-soft">
         Only this browser knows it; clearing site data loses it.{' '}
-        <Link to="/sign-in?next=%2Fprinter" className="text-ember-700 underline">
-          Sign in
-        </Link>{' '}
+        <SignInLink className="text-ember-700 underline">Sign in</SignInLink>{' '}
         and Canwright offers to keep it with your account.
       </p>
     </div>

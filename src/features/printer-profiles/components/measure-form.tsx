@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, useWatch, type UseFormSetError } from 'react-hook-form';
-import { Link } from 'react-router';
+import { SignInLink } from '../../../components/sign-in-link.tsx';
 import { CALIBRATION_X_MM, CALIBRATION_Y_MM } from '../../../../shared/print/draw-calibration.ts';
 import { printerProfileInputSchema, printerScale, type PrinterProfileInput } from '../../../../shared/print/printer-profile.ts';
 import { Button } from '../../../components/button.tsx';
@@ -90,9 +90,7 @@ export function MeasureForm({ signedIn }: { signedIn: boolean | undefined }) {
       {signedIn === false && (
         <p className="text-sm text-ink-soft">
           You are not signed in, so this profile is kept in this browser only, and saving again replaces it.{' '}
-          <Link to="/sign-in?next=%2Fprinter" className="text-ember-700 underline">
-            Sign in
-          </Link>{' '}
+          <SignInLink className="text-ember-700 underline">Sign in</SignInLink>{' '}
           to keep printer profiles with your account, on any device.
         </p>
       )}
