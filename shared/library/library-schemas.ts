@@ -33,11 +33,16 @@ export const designDocumentSchema = z.custom<DesignInput>(() => true).transform(
   return z.NEVER;
 });
 
+/** Limits of the library's fields, counted after trimming; the client says them before the server refuses. */
 export const MAX_TAGS = 20;
+export const DESIGN_NAME_MAX = 120;
+export const TAG_MAX = 40;
+export const VERSION_NOTE_MAX = 500;
+export const LIBRARY_SEARCH_MAX = 100;
 
-const designName = z.string().trim().min(1).max(120);
+const designName = z.string().trim().min(1).max(DESIGN_NAME_MAX);
 /** Tags are compared in lower case, so "Pint" and "pint" are one tag; repeats are dropped. */
-const tag = z.string().trim().toLowerCase().min(1).max(40);
+const tag = z.string().trim().toLowerCase().min(1).max(TAG_MAX);
 const tags = z
   .array(tag)
   .max(MAX_TAGS)
@@ -45,7 +50,7 @@ const tags = z
 const note = z
   .string()
   .trim()
-  .max(500)
+  .max(VERSION_NOTE_MAX)
   .transform((text) => text || undefined);
 
 export const createDesignInputSchema = z.object({ name: designName.optional(), tags: tags.optional(), document: designDocumentSchema }).strict();
@@ -65,7 +70,7 @@ export type DesignSort = z.infer<typeof designSortSchema>;
 
 /** GET /api/designs query: q matches a name or a tag (substring, any case); tag is one exact tag. */
 export const designListQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
+  q: z.string().trim().max(LIBRARY_SEARCH_MAX).optional(),
   tag: tag.optional(),
   sort: designSortSchema.default('updated'),
 });

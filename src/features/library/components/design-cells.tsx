@@ -1,4 +1,6 @@
+import { useState } from 'react';
 import { Link } from 'react-router';
+import { checkDesignName } from '../field-limits.ts';
 import { useDesignRow } from './design-row-actions.ts';
 
 const small = 'inline-flex min-h-9 items-center rounded-md border px-2.5 text-sm font-medium';
@@ -8,6 +10,10 @@ const danger = `${small} border-danger/40 bg-white text-danger hover:bg-danger/5
 /** The design's name as a link to its history, or a form to rename it in place. */
 export function NameCell() {
   const { design, nameId, renaming, setRenaming, busy, rename } = useDesignRow();
+  const [tried, setTried] = useState(false);
+  // Too long is said at once; an empty name only after trying to save it.
+  const nameError = renaming !== undefined && (tried || renaming.trim()) ? checkDesignName(renaming) : undefined;
+  const errorId = `${nameId}-error`;
   return (
     <>
       {renaming === undefined ? (
@@ -18,21 +24,43 @@ export function NameCell() {
         <form
           aria-label={`Rename ${design.name}`}
           className="flex flex-wrap items-center gap-2"
+          noValidate
           onSubmit={(event) => {
             event.preventDefault();
-            void rename(renaming);
+            setTried(true);
+            if (!checkDesignName(renaming)) void rename(renaming.trim());
           }}
         >
           <label id={nameId} className="sr-only" htmlFor={`${nameId}-input`}>
             New name for {design.name}
           </label>
-          <input id={`${nameId}-input`} value={renaming} onChange={(e) => setRenaming(e.target.value)} maxLength={120} required autoFocus className="min-h-9 min-w-0 flex-1 rounded-md border border-rule bg-white px-2 text-sm" />
-          <button type="submit" disabled={busy || !renaming.trim()} className={plain}>
+          <input
+            id={`${nameId}-input`}
+            value={renaming}
+            onChange={(e) => setRenaming(e.target.value)}
+            aria-invalid={nameError ? true : undefined}
+            aria-describedby={nameError ? errorId : undefined}
+            autoFocus
+            className="min-h-9 min-w-0 flex-1 rounded-md border border-rule bg-white px-2 text-sm aria-[invalid]:border-danger"
+          />
+          <button type="submit" disabled={busy} className={plain}>
             Save name
           </button>
-          <button type="button" onClick={() => setRenaming(undefined)} className={plain}>
+          <button
+            type="button"
+            onClick={() => {
+              setTried(false);
+              setRenaming(undefined);
+            }}
+            className={plain}
+          >
             Cancel
           </button>
+          {nameError && (
+            <p id={errorId} className="w-full text-sm text-danger">
+              {nameError}
+            </p>
+          )}
         </form>
       )}
       <p className="text-xs text-ink-soft">

@@ -1,4 +1,6 @@
 import type { SortingState } from '@tanstack/react-table';
+import { useId } from 'react';
+import { checkLibrarySearch } from '../field-limits.ts';
 import type { DesignSortColumn } from './library-columns.tsx';
 
 interface LibraryFiltersProps {
@@ -29,11 +31,25 @@ const control = 'min-h-10 rounded-md border border-rule bg-white px-3 text-sm te
 /** Search, tag filter and (on a phone, where the sortable header is hidden) a sort menu sharing the table's sorting. */
 export function LibraryFilters({ search, onSearch, tag, tags, onTag, sorting, onSorting }: LibraryFiltersProps) {
   const current = sorting[0];
+  const errorId = useId();
+  const searchError = checkLibrarySearch(search);
   return (
     <div className="mb-4 flex flex-wrap items-end gap-3">
       <label className="flex w-full min-w-0 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-auto sm:min-w-64 sm:flex-1">
         Search names and tags
-        <input type="search" value={search} onChange={(e) => onSearch(e.target.value)} maxLength={100} className={control} />
+        <input
+          type="search"
+          value={search}
+          onChange={(e) => onSearch(e.target.value)}
+          aria-invalid={searchError ? true : undefined}
+          aria-describedby={searchError ? errorId : undefined}
+          className={`${control} aria-[invalid]:border-danger`}
+        />
+        {searchError && (
+          <span id={errorId} className="text-sm font-normal text-danger">
+            {searchError} The list shows the last search that fitted.
+          </span>
+        )}
       </label>
       <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
         Tag

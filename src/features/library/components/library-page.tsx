@@ -7,6 +7,7 @@ import { Page } from '../../../components/page.tsx';
 import { useDesigns } from '../api/get-designs.ts';
 import { DesignTable } from './design-table.tsx';
 import { defaultDesignSorting, designTableOptions } from './library-columns.tsx';
+import { checkLibrarySearch } from '../field-limits.ts';
 import { LibraryFilters } from './library-filters.tsx';
 
 /** Typing pauses this long before the search is sent (common practice, no source). */
@@ -23,6 +24,8 @@ export function LibraryPage() {
   const [sorting, setSorting] = useState<SortingState>(defaultDesignSorting);
 
   useEffect(() => {
+    // A search longer than the server takes is not sent; its field says so and the list stays.
+    if (checkLibrarySearch(search)) return;
     const timer = setTimeout(() => setSentSearch(search.trim()), SEARCH_DELAY_MS);
     return () => clearTimeout(timer);
   }, [search]);

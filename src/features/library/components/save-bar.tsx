@@ -11,6 +11,7 @@ import { useAccount } from '../../account/api/get-account.ts';
 import { draftStore, useDraft } from '../../designer/draft-store.ts';
 import { useCreateDesign } from '../api/create-design.ts';
 import { useSaveVersion } from '../api/save-version.ts';
+import { checkVersionNote } from '../field-limits.ts';
 
 interface Status {
   tone: 'success' | 'error' | 'info';
@@ -18,8 +19,6 @@ interface Status {
 }
 
 const linkClass = 'inline-flex min-h-10 items-center rounded-md px-3 text-sm font-medium text-ember-700 underline hover:bg-ember-50';
-/** The server's limit on a version note (shared/library/library-schemas.ts). */
-const NOTE_MAX = 500;
 
 /** A failed save in the maker's terms. */
 function describeFailure(error: unknown): Status {
@@ -43,7 +42,7 @@ export function SaveBar({ document, valid }: { document: DesignInput; valid: boo
   const [status, setStatus] = useState<Status>();
   const busy = create.isPending || save.isPending;
   const boundId = draft?.savedId && draft.accountId === account?.id ? draft.savedId : undefined;
-  const noteTooLong = note.trim().length > NOTE_MAX;
+  const noteError = checkVersionNote(note);
 
   if (account === undefined) return null; // still asking who is signed in
   if (account === null)
@@ -100,19 +99,19 @@ export function SaveBar({ document, valid }: { document: DesignInput; valid: boo
           className="flex flex-wrap items-end gap-2"
           onSubmit={(event) => {
             event.preventDefault();
-            if (!noteTooLong) void saveNext(boundId);
+            if (!noteError) void saveNext(boundId);
           }}
         >
           <label className="flex min-w-0 flex-1 flex-col gap-1 text-xs font-medium text-ink-soft sm:w-56 sm:flex-none">
             Version note (optional)
-            <input value={note} onChange={(e) => setNote(e.target.value)} aria-invalid={noteTooLong ? true : undefined} aria-describedby={noteTooLong ? 'version-note-error' : undefined} className="min-h-10 rounded-md border border-rule bg-white px-3 text-sm text-ink aria-[invalid]:border-danger" />
-            {noteTooLong && (
+            <input value={note} onChange={(e) => setNote(e.target.value)} aria-invalid={noteError ? true : undefined} aria-describedby={noteError ? 'version-note-error' : undefined} className="min-h-10 rounded-md border border-rule bg-white px-3 text-sm text-ink aria-[invalid]:border-danger" />
+            {noteError && (
               <span id="version-note-error" className="text-xs font-normal text-danger">
-                A version note can be at most {NOTE_MAX} characters; this one has {note.trim().length}.
+                {noteError}
               </span>
             )}
           </label>
-          <Button type="submit" disabled={busy || !valid || noteTooLong}>
+          <Button type="submit" disabled={busy || !valid || Boolean(noteError)}>
             Save new version
           </Button>
           <Button variant="secondary" disabled={busy || !valid} onClick={() => void saveNew()}>

@@ -12,11 +12,14 @@ export function SharePanel({ design }: { design: DesignDetail }) {
   const share = useShareDesign();
   const unshare = useUnshareDesign();
   const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string }>();
+  // Said in a live region that is always there, so a screen reader hears each copy.
+  const [copied, setCopied] = useState<{ ok: boolean; text: string }>();
   const busy = share.isPending || unshare.isPending;
   const link = design.shareUrlPath ? `${location.origin}${design.shareUrlPath}` : undefined;
 
   async function change(turnOn: boolean) {
     setStatus(undefined);
+    setCopied(undefined);
     try {
       await (turnOn ? share : unshare).mutateAsync(design.id);
       setStatus({ tone: 'success', text: turnOn ? 'Sharing is on. Anyone with the link can see and print this design.' : 'Sharing is off. The old link no longer works.' });
@@ -27,13 +30,16 @@ export function SharePanel({ design }: { design: DesignDetail }) {
 
   async function copy() {
     if (!link) return;
+    setCopied(undefined);
     try {
       await navigator.clipboard.writeText(link);
-      setStatus({ tone: 'success', text: 'Link copied.' });
+      setCopied({ ok: true, text: 'Link copied.' });
     } catch {
-      // Some browsers refuse the clipboard; selecting the text lets the maker copy it by hand.
+      // The clipboard can be refused (permissions, a page not served over HTTPS); selecting the
+      // text lets the maker copy it by hand.
+      input.current?.focus();
       input.current?.select();
-      setStatus({ tone: 'error', text: 'This browser would not copy. The link is selected: copy it with your keyboard.' });
+      setCopied({ ok: false, text: 'This browser would not copy the link, so it is selected: press Ctrl+C (⌘C on a Mac) to copy it.' });
     }
   }
 
@@ -50,12 +56,15 @@ export function SharePanel({ design }: { design: DesignDetail }) {
           <div className="flex flex-wrap gap-2">
             <input id={linkId} ref={input} readOnly value={link} onFocus={(e) => e.target.select()} className="min-h-10 w-full min-w-0 rounded-md border border-rule bg-paper px-3 font-mono text-sm" />
             <Button variant="secondary" onClick={() => void copy()}>
-              Copy
+              Copy link
             </Button>
             <Button variant="danger" disabled={busy} onClick={() => void change(false)}>
               Stop sharing
             </Button>
           </div>
+          <p role="status" className={`text-sm ${copied?.ok ? 'font-medium text-ok' : ''}`}>
+            {copied?.text}
+          </p>
         </>
       ) : (
         <div className="flex flex-wrap items-center gap-3">

@@ -2,12 +2,17 @@ import { useId, useState } from 'react';
 import { MAX_TAGS } from '../../../../shared/library/library-schemas.ts';
 import { Button } from '../../../components/button.tsx';
 import { useUpdateDesign } from '../api/update-design.ts';
+import { checkNewTag, normalizeTag } from '../field-limits.ts';
 
-/** Adds and removes a design's tags; each change is saved at once (tags are not versioned). */
+/**
+ * Adds and removes a design's tags; each change is saved at once (tags are not versioned). A tag
+ * that cannot be added says why beside the field and stays as typed.
+ */
 export function TagsEditor({ id, tags }: { id: string; tags: string[] }) {
   const inputId = useId();
   const update = useUpdateDesign();
   const [text, setText] = useState('');
+  const [tried, setTried] = useState(false);
   const [problem, setProblem] = useState<string>();
 
   async function saveTags(next: string[]) {
@@ -15,14 +20,15 @@ export function TagsEditor({ id, tags }: { id: string; tags: string[] }) {
     try {
       await update.mutateAsync({ id, change: { tags: next } });
       setText('');
+      setTried(false);
     } catch (error) {
       setProblem((error as Error).message);
     }
   }
 
-  // The API lower-cases and trims tags; doing it here too keeps "Pint" from looking new.
-  const typed = text.trim().toLowerCase();
-  const canAdd = typed.length > 0 && !tags.includes(typed) && tags.length < MAX_TAGS;
+  // Said as soon as it is true (a repeat, too long, no room left); "type a tag" only after a try.
+  const fieldError = text.trim() || tried ? checkNewTag(text, tags) : undefined;
+  const full = tags.length >= MAX_TAGS;
 
   return (
     <section aria-labelledby={`${inputId}-heading`} className="flex flex-col gap-2">
@@ -44,23 +50,39 @@ export function TagsEditor({ id, tags }: { id: string; tags: string[] }) {
         <p className="text-sm text-ink-soft">No tags yet. Tags help you find designs later, e.g. “pint” or “build night”.</p>
       )}
       <form
-        className="flex flex-wrap items-end gap-2"
+        noValidate
+        className="flex flex-col gap-1"
         onSubmit={(event) => {
           event.preventDefault();
-          if (canAdd) void saveTags([...tags, typed]);
+          setTried(true);
+          if (!checkNewTag(text, tags)) void saveTags([...tags, normalizeTag(text)]);
         }}
       >
-        <label htmlFor={inputId} className="sr-only">
-          New tag
+        <label htmlFor={inputId} className="text-xs font-medium text-ink-soft">
+          New tag {full ? `(${MAX_TAGS} of ${MAX_TAGS} used)` : ''}
         </label>
-        <input id={inputId} value={text} onChange={(e) => setText(e.target.value)} maxLength={40} placeholder="New tag" className="min-h-10 min-w-0 flex-1 rounded-md border border-rule bg-white px-3 text-sm sm:max-w-56" />
-        <Button type="submit" variant="secondary" disabled={!canAdd || update.isPending}>
-          Add tag
-        </Button>
+        <div className="flex flex-wrap items-start gap-2">
+          <input
+            id={inputId}
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+            aria-invalid={fieldError ? true : undefined}
+            aria-describedby={fieldError ? `${inputId}-error` : undefined}
+            className="min-h-10 min-w-0 flex-1 rounded-md border border-rule bg-white px-3 text-sm aria-[invalid]:border-danger sm:max-w-56"
+          />
+          <Button type="submit" variant="secondary" disabled={update.isPending}>
+            Add tag
+          </Button>
+        </div>
+        {fieldError && (
+          <p id={`${inputId}-error`} className="text-sm text-danger">
+            {fieldError}
+          </p>
+        )}
       </form>
       {problem && (
         <p role="alert" className="text-sm text-danger">
-          {problem}
+          The tags could not be saved: {problem}
         </p>
       )}
     </section>
