@@ -22,7 +22,8 @@ const on = (paper: PrintOptions['paper'], orientation: PrintOptions['orientation
 // Pint can, 303 x 406: 4 6/16 in = 111.1 mm tall (can codes: whole inches, then sixteenths; from memory);
 // pi x (80.96 + 0.1) mm = 254.7 mm round (worked arithmetic).
 const pintWall = makeStrip({ name: 'Pint wall', lengthMm: 254.7, heightMm: 111.1 });
-// US gallon paint can: 7 1/2 in = 190.5 mm tall, 6 5/8 in = 168.3 mm across (from memory).
+// US gallon paint can, 610x708: 7 1/2 in = 190.5 mm tall, 6 5/8 in = 168.3 mm across (can code, from
+// memory); its whole wall as one strip, as when its rows leave no gap to cut it into bands.
 const gallonWall = makeStrip({ name: 'Gallon wall', lengthMm: Math.PI * 168.4, heightMm: 190.5 });
 
 describe('suggestPaperFix', () => {

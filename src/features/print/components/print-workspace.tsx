@@ -1,7 +1,8 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { Link } from 'react-router';
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
-import type { PrintOptions } from '../../../../shared/print/paper.ts';
+import { describeSheet, type PrintOptions } from '../../../../shared/print/paper.ts';
+import type { PaperFix } from '../../../../shared/print/suggest-paper-fix.ts';
 import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
 import { PaperOptions } from '../../../components/paper-options.tsx';
@@ -14,6 +15,7 @@ import { useKitPlan } from '../use-kit-plan.ts';
 import { BuildSheetView } from './build-sheet-view.tsx';
 import { PrinterChoice, usePrinterChoices } from './printer-choice.tsx';
 import { SheetPreviews } from './sheet-previews.tsx';
+import { SheetRefusal } from './sheet-refusal.tsx';
 
 const select = 'min-h-10 rounded-md border border-rule bg-white px-2 text-sm text-ink';
 const MARGIN_MM = 12.7; // 1/2 in: inside what common desktop printers can reach (common practice, no source)
@@ -38,6 +40,18 @@ export function PrintWorkspace({ design, savedId, version, checksLink }: { desig
   const [status, setStatus] = useState<{ tone: 'success' | 'error'; text: string }>();
   const [busy, setBusy] = useState(false);
   const markPrinted = useMarkPrinted();
+  // The paper choice a "does not fit" button made, said once the sheets are drawn on it.
+  const [applied, setApplied] = useState<string>();
+  const paperSelect = useRef<HTMLSelectElement>(null);
+  const orientationSelect = useRef<HTMLSelectElement>(null);
+
+  function applyFix(fix: PaperFix) {
+    setPaper(fix.paper);
+    setOrientation(fix.orientation);
+    setApplied(`Paper changed to ${describeSheet(fix.paper, fix.orientation)}.`);
+    // The button goes once the kit fits; the control it changed takes the focus instead.
+    (fix.paper === print.paper ? orientationSelect : paperSelect).current?.focus();
+  }
 
   async function download(format: KitFormat, sheet?: number) {
     setBusy(true);
@@ -63,13 +77,29 @@ export function PrintWorkspace({ design, savedId, version, checksLink }: { desig
         <div className="grid gap-3 sm:grid-cols-[1fr_1fr_2fr]">
           <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
             Paper
-            <select value={print.paper} onChange={(e) => setPaper(e.target.value as PrintOptions['paper'])} className={select}>
+            <select
+              ref={paperSelect}
+              value={print.paper}
+              onChange={(e) => {
+                setPaper(e.target.value as PrintOptions['paper']);
+                setApplied(undefined);
+              }}
+              className={select}
+            >
               <PaperOptions />
             </select>
           </label>
           <label className="flex flex-col gap-1 text-xs font-medium text-ink-soft">
             Orientation
-            <select value={orientation} onChange={(e) => setOrientation(e.target.value as PrintOptions['orientation'])} className={select}>
+            <select
+              ref={orientationSelect}
+              value={orientation}
+              onChange={(e) => {
+                setOrientation(e.target.value as PrintOptions['orientation']);
+                setApplied(undefined);
+              }}
+              className={select}
+            >
               <option value="portrait">Portrait</option>
               <option value="landscape">Landscape</option>
             </select>
@@ -102,16 +132,18 @@ export function PrintWorkspace({ design, savedId, version, checksLink }: { desig
             .
           </Notice>
         )}
-        {kit.ok ? (
-          <>
+        {/* Always there, so a change of paper is announced: the sheet count, or why it does not print. */}
+        <div aria-live="polite" className="flex flex-col gap-2">
+          {applied && kit.ok && <p className="text-sm font-medium text-ok">{applied}</p>}
+          {kit.ok ? (
             <p className="text-sm text-ink-soft">
               {kit.plan.imposition.sheets.length} template sheet{kit.plan.imposition.sheets.length === 1 ? '' : 's'}, then the build sheet.
             </p>
-            <SheetPreviews plan={kit.plan} busy={busy} onDownloadSvg={(sheet) => void download('svg', sheet)} />
-          </>
-        ) : (
-          <p className="text-sm text-danger">{kit.problem}</p>
-        )}
+          ) : (
+            <SheetRefusal problem={kit.problem} fix={kit.fix} onApply={applyFix} />
+          )}
+        </div>
+        {kit.ok && <SheetPreviews plan={kit.plan} busy={busy} onDownloadSvg={(sheet) => void download('svg', sheet)} />}
         <div className="flex flex-wrap gap-2">
           <Button disabled={busy || !kit.ok} onClick={() => void download('pdf')}>
             Download PDF kit
