@@ -2,6 +2,7 @@ import { benchBundle } from './bundle-bench.ts';
 import { benchLayout } from './layout-bench.ts';
 import { benchPdf } from './pdf-bench.ts';
 import { benchPreview } from './preview-bench.ts';
+import { benchTyping } from './typing-bench.ts';
 
 /** npm run bench: speed and size figures (machine-dependent; compare runs on one machine). */
 console.log(`Canwright benchmarks on Node ${process.version}`);
@@ -9,3 +10,4 @@ benchLayout();
 await benchPdf();
 await benchBundle();
 await benchPreview();
+await benchTyping();

@@ -13,6 +13,8 @@ const TOOLBAR_BAND_PX = 44;
 /** Wheel zoom: e^(-deltaY / 650), so one 100 px notch is about 1.17x (common practice, no source). */
 const WHEEL_ZOOM_PER_PX = 1 / 650;
 const LINE_PX = 16; // deltaMode 1 reports lines; about one line of text each
+/** The User Timing mark set when the preview has painted (read by the design-screen typing bench). */
+export const PAINTED_MARK = 'canwright:preview-painted';
 
 type PointerLike = { pointerId: number; clientX: number; clientY: number };
 type Point = { x: number; y: number };
@@ -138,6 +140,9 @@ export class PreviewController {
       this.drawer = new CanvasDrawingContext(ctx, view, this.dpr);
     }
     paintScene(this.drawer, this.scene, view, this.dpr);
+    // A User Timing mark per paint, for the keystroke-to-preview bench; only the latest is kept.
+    performance.clearMarks(PAINTED_MARK);
+    performance.mark(PAINTED_MARK);
     return performance.now() - started;
   }
 
