@@ -38,5 +38,9 @@ export async function apiRequest<S extends z.ZodType>(path: string, schema: S, o
     const error = (payload as { error?: { code?: string; message?: string; details?: { fields?: FieldProblem[] } } } | undefined)?.error;
     throw new ApiError(response.status, error?.code ?? 'HTTP_' + response.status, error?.message ?? `The server answered ${response.status}.`, error?.details?.fields ?? []);
   }
-  return schema.parse(payload);
+  const parsed = schema.safeParse(payload);
+  if (parsed.success) return parsed.data;
+  // A proxy's page or a server of another version: say so plainly, never the checker's own words.
+  console.error(`Unexpected answer from ${path}`, parsed.error.issues);
+  throw new ApiError(response.status, 'UNEXPECTED_ANSWER', 'The server sent an answer this page does not understand. Reload the page; if it keeps happening, the server may be updating.');
 }
