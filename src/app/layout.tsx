@@ -64,9 +64,9 @@ export function Layout() {
             ) : (
               <>
                 <SignInLink className={navClass}>Sign in</SignInLink>
-                <NavLink to="/sign-up" className={navClass}>
+                <SignInLink page="/sign-up" className={navClass}>
                   Create account
-                </NavLink>
+                </SignInLink>
               </>
             )}
           </nav>

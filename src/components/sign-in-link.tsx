@@ -4,6 +4,8 @@ import { nextFromHere, withNext } from '../features/auth/next-path.ts';
 
 interface SignInLinkProps extends Omit<NavLinkProps, 'to' | 'children'> {
   children?: ReactNode;
+  /** Sign in (the default), or create an account and come back here after confirming it. */
+  page?: '/sign-in' | '/sign-up';
 }
 
 /**
@@ -11,10 +13,10 @@ interface SignInLinkProps extends Omit<NavLinkProps, 'to' | 'children'> {
  * (/sign-in?next=<this path and query>). On the sign-in and sign-up pages themselves it passes
  * on the `next` they were opened with. A NavLink, so a menu can style it as the current page.
  */
-export function SignInLink({ children = 'Sign in', ...link }: SignInLinkProps) {
+export function SignInLink({ children = 'Sign in', page = '/sign-in', ...link }: SignInLinkProps) {
   const location = useLocation();
   return (
-    <NavLink to={withNext('/sign-in', nextFromHere(location))} {...link}>
+    <NavLink to={withNext(page, nextFromHere(location))} {...link}>
       {children}
     </NavLink>
   );

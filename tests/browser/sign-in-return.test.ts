@@ -62,6 +62,7 @@ describe.skipIf(skip)('signing in brings a person back', () => {
       const p = await context.newPage();
       p.setDefaultTimeout(20_000);
       await p.goto(`${server.url}/printer`);
+      expect(await p.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Create account' }).getAttribute('href')).toBe('/sign-up?next=%2Fprinter');
       await p.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Sign in' }).click();
       await p.getByRole('link', { name: 'Create an account' }).click();
       await p.getByRole('heading', { name: 'Create your account', level: 1 }).waitFor();
