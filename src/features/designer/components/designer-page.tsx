@@ -111,10 +111,12 @@ function DesignerScreen({ draft }: { draft: Draft }) {
                 </div>
                 <DesignSettings units={units} />
               </div>
-              <div className="contents lg:flex lg:min-w-0 lg:flex-col lg:gap-5">
+              {/* Phone: the preview alone sticks above the form. Desktop: the whole column (preview,
+                  checks, air, print) stays in view, scrolling on its own when taller than the window. */}
+              <div className="contents lg:sticky lg:top-2 lg:flex lg:max-h-[calc(100dvh-1rem)] lg:min-w-0 lg:flex-col lg:gap-5 lg:self-start lg:overflow-y-auto lg:pb-2">
                 {good && (
                   <PreviewPanel
-                    className="sticky top-0 z-10 order-first -mx-4 border-b border-rule px-4 pb-2 pt-1 shadow-sm lg:top-2 lg:order-none lg:mx-0 lg:border-0 lg:px-0 lg:shadow-none"
+                    className="sticky top-0 z-10 order-first -mx-4 border-b border-rule px-4 pb-2 pt-1 shadow-sm lg:static lg:order-none lg:mx-0 lg:border-0 lg:px-0 lg:pt-0 lg:shadow-none"
                     design={good.design}
                     layout={good.layout}
                     units={units}
