@@ -38,9 +38,11 @@ export function withNext(path: string, next: string | undefined): string {
 
 /**
  * Where a person on `location` should come back to after signing in: this page, or on a page of
- * the sign-in flow itself, wherever that flow was started from (its own `next`).
+ * the sign-in flow itself, wherever that flow was started from (its own `next`). The landing
+ * page is no place to come back to: from there a new session goes on to the account page.
  */
 export function nextFromHere(location: { pathname: string; search: string }): string | undefined {
   if (isAuthPath(location.pathname)) return safeNextPath(new URLSearchParams(location.search).get('next'));
+  if (location.pathname === '/') return undefined;
   return safeNextPath(location.pathname + location.search);
 }

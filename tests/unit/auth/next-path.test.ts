@@ -52,6 +52,10 @@ describe('nextFromHere', () => {
     expect(nextFromHere({ pathname: '/design/print', search: '?paper=a4' })).toBe('/design/print?paper=a4');
   });
 
+  it('from the landing page, adds none (a new session goes on to the account page)', () => {
+    expect(nextFromHere({ pathname: '/', search: '' })).toBeUndefined();
+  });
+
   it('on a sign-in page, passes on the next it was opened with, and only a safe one', () => {
     expect(nextFromHere({ pathname: '/sign-up', search: '?next=%2Flibrary' })).toBe('/library');
     expect(nextFromHere({ pathname: '/verify', search: '?verified=1' })).toBeUndefined();
