@@ -2,31 +2,13 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Page } from 'playwright-core';
-import type { DesignInput } from '../shared/design/design-schema.ts';
 import { buildClient, clientBuildIsStale } from '../server/boot/client-build.ts';
 import { startServer } from '../server/server.ts';
+import { wallOfHoles } from '../src/features/preview/demo-designs.ts';
 import { PAINTED_MARK } from '../src/features/preview/preview-controller.ts';
 
 const RUNS = 30;
 const WARMUP = 5;
-
-/** Rows of 1/16 in holes round a No. 10 can (catalogue food-603x700), 8 mm apart up the wall. */
-function wallOfHoles(rows: number, perRow: number): DesignInput {
-  return {
-    schemaVersion: 1,
-    name: `${rows * perRow}-hole typing test`,
-    units: 'in',
-    parts: [
-      {
-        id: 'chamber',
-        role: 'burn-chamber',
-        name: 'Test can',
-        vessel: { source: 'catalogue', catalogueId: 'food-603x700', name: 'No. 10 food can (603x700)', outerDiameterMm: 157.1625, heightMm: 177.8, wallThicknessMm: 0.25, seamAngleDeg: 0, bottomRimInsetMm: 4 },
-        sideRows: Array.from({ length: rows }, (_, i) => ({ id: `row-${i + 1}`, label: `Row ${i + 1}`, group: i < rows / 2 ? ('primary' as const) : ('secondary' as const), drillId: 'frac:1/16', count: perRow, height: { from: 'bottom' as const, mm: 12 + i * 8 }, startDeg: 1.8 })),
-      },
-    ],
-  };
-}
 
 /**
  * One keystroke in the first row's hole count (one hole fewer, then back), dispatched in the page as

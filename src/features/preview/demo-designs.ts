@@ -27,13 +27,14 @@ export function loadDemoDesigns(): DemoDesign[] {
 }
 
 /**
- * A stress case for redraw timing: 500 holes on one wall strip, five rows of 100 x 1/16 in round
- * a No. 10 can (157.2 mm across, 177.8 mm tall: the catalogue's food-603x700).
+ * Stress cases for redraw and typing timing: `rows` rows of `perRow` x 1/16 in holes round a
+ * No. 10 can (157.2 mm across, 177.8 mm tall: the catalogue's food-603x700), spread from 20 mm to
+ * 140 mm above the bottom; the lower three fifths primary air, the rest jets.
  */
-export function buildBenchDesign(): Design {
-  const input: DesignInput = {
+export function wallOfHoles(rows: number, perRow: number): DesignInput {
+  return {
     schemaVersion: 1,
-    name: '500-hole test can',
+    name: `${rows * perRow}-hole test can`,
     units: 'in',
     parts: [
       {
@@ -41,11 +42,23 @@ export function buildBenchDesign(): Design {
         role: 'burn-chamber',
         name: 'Test can',
         vessel: { source: 'catalogue', catalogueId: 'food-603x700', name: 'No. 10 food can (603x700)', outerDiameterMm: 157.1625, heightMm: 177.8, wallThicknessMm: 0.25, seamAngleDeg: 0, bottomRimInsetMm: 4 },
-        sideRows: [20, 50, 80, 110, 140].map((mm, i) => ({ id: `row-${i + 1}`, label: `Row ${i + 1}`, group: i < 3 ? 'primary' : 'secondary', drillId: 'frac:1/16', count: 100, height: { from: 'bottom', mm }, startDeg: 1.8 })),
+        sideRows: Array.from({ length: rows }, (_, i) => ({
+          id: `row-${i + 1}`,
+          label: `Row ${i + 1}`,
+          group: i < Math.ceil(rows * 0.6) ? ('primary' as const) : ('secondary' as const),
+          drillId: 'frac:1/16',
+          count: perRow,
+          height: { from: 'bottom' as const, mm: rows === 1 ? 20 : 20 + (i * 120) / (rows - 1) },
+          startDeg: 1.8,
+        })),
       },
     ],
   };
-  const result = validateDesign(input);
+}
+
+/** The 500-hole redraw case: five rows of 100, 30 mm apart. */
+export function buildBenchDesign(): Design {
+  const result = validateDesign(wallOfHoles(5, 100));
   if (!result.ok) throw new Error(`The bench design is invalid: ${result.problems.map((p) => `${p.path} ${p.message}`).join('; ')}`);
   return result.design;
 }
