@@ -1,4 +1,4 @@
-import express, { type Express } from 'express';
+import express, { type Express, type Request } from 'express';
 import helmet from 'helmet';
 import { toNodeHandler } from 'better-auth/node';
 import { createAccountRepository } from './account/account-repository.ts';
@@ -13,6 +13,7 @@ import { loadSession } from './http/session.ts';
 import { createDesignLibrary } from './library/design-library.ts';
 import { createDesignRepository } from './library/design-repository.ts';
 import type { MailCapture } from './mail/mail-capture.ts';
+import { mayReadMailbox, type MailboxMode } from './mail/mailbox-policy.ts';
 import { createPrinterProfileRepository } from './printer-profiles/printer-profile-repository.ts';
 import { createPrinterProfileUseCases } from './printer-profiles/printer-profile-use-cases.ts';
 import { accountRoutes } from './routes/account-routes.ts';
@@ -28,8 +29,8 @@ export interface AppDeps {
   database: Database;
   auth: Auth;
   version: string;
-  /** Present when mail goes to the local capture server: enables the dev mailbox. */
-  mailCapture?: MailCapture;
+  /** Present when mail goes to the local capture server: the mailbox, and who may read it. */
+  mailbox?: { capture: MailCapture; mode: MailboxMode };
   /** Folder of the built client; omitted in API tests. */
   clientDir?: string;
 }
@@ -53,8 +54,10 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/designs', designBodyParser());
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRoutes(deps.database, deps.version));
-  app.get('/api/app-info', (_req, res) => {
-    res.json({ name: 'Canwright', version: deps.version, devMailbox: Boolean(deps.mailCapture) });
+  const mailbox = deps.mailbox;
+  const mayRead = (req: Request) => Boolean(mailbox && mayReadMailbox(mailbox.mode, req));
+  app.get('/api/app-info', (req, res) => {
+    res.json({ name: 'Canwright', version: deps.version, devMailbox: mayRead(req) });
   });
   app.use('/api', loadSession(deps.auth));
 
@@ -65,7 +68,8 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/designs', designRoutes(designLibrary));
   app.use('/api/shared', sharedDesignRoutes(designLibrary));
   app.use('/api/admin', adminRoutes(createAdminUseCases(deps.auth, createUserDirectory(db))));
-  if (deps.mailCapture) app.use('/api/dev/mail', devMailRoutes(deps.mailCapture));
+  // Anyone else is answered as if there were no mailbox (404), so its existence is not told either.
+  if (mailbox) app.use('/api/dev/mail', (req, res, next) => (mayRead(req) ? next() : apiNotFound(req, res, next)), devMailRoutes(mailbox.capture));
   app.use('/api', apiNotFound);
 
   if (deps.clientDir) serveClient(app, deps.clientDir);

@@ -36,6 +36,8 @@ async function main(): Promise<void> {
     publicUrl: env.PUBLIC_URL,
     secret: env.BETTER_AUTH_SECRET ?? localAuthSecret(dataDir),
     smtpUrl: env.SMTP_URL,
+    localMailboxForNetwork: env.LOCAL_MAILBOX_FOR_NETWORK,
+    production: env.NODE_ENV === 'production',
     mailFrom: env.MAIL_FROM,
     seedDemo: env.SEED_DEMO,
     clientDir,
@@ -44,7 +46,8 @@ async function main(): Promise<void> {
 
   console.log(`\nCanwright is running at ${running.url}`);
   console.log(`Data: ${env.DATABASE_URL ? 'PostgreSQL server (DATABASE_URL)' : join(dataDir, 'pglite')}`);
-  if (running.mail) console.log(`Mail is kept locally; read it at ${running.url}/dev/mail`);
+  if (running.mail) console.log(`Mail is kept locally; read it at ${running.url}/dev/mail${env.LOCAL_MAILBOX_FOR_NETWORK ? ' (open to the network: LOCAL_MAILBOX_FOR_NETWORK)' : ' (from this machine only)'}`);
+  else if (!env.SMTP_URL) console.log('Mail is not sent: no SMTP_URL, and HOST is not this machine only (set LOCAL_MAILBOX_FOR_NETWORK=true to read it at /dev/mail).');
   if (env.SEED_DEMO) {
     console.log('Demo sign-ins (Alder Street Makerspace):');
     for (const account of demoAccounts) console.log(`  ${account.role.padEnd(10)} ${account.email.padEnd(34)} ${account.password}`);

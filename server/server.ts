@@ -5,7 +5,8 @@ import { createApp } from './app.ts';
 import { createAuth, type Auth } from './auth/auth.ts';
 import { openDatabase, type Database, type DatabaseTarget } from './db/database.ts';
 import { startMailCapture, type MailCapture } from './mail/mail-capture.ts';
-import { createMailer, type Mailer } from './mail/mailer.ts';
+import { createMailer, createNotSentMailer, type Mailer } from './mail/mailer.ts';
+import { mailboxMode, type MailboxMode } from './mail/mailbox-policy.ts';
 import { seedDemo } from './seed/seed-demo.ts';
 import { version } from './version.ts';
 
@@ -16,8 +17,14 @@ export interface ServerOptions {
   /** Public base URL; when omitted, http://localhost:<bound port>. */
   publicUrl?: string;
   secret?: string;
-  /** Real SMTP server; when omitted, mail goes to a local capture server that the app starts. */
+  /**
+   * Real SMTP server. When omitted, mail goes to a local mailbox that the app starts, readable only
+   * from this machine, or, on a host others can reach, only with `localMailboxForNetwork`;
+   * otherwise mail is logged as not sent. Never a local mailbox in production.
+   */
   smtpUrl?: string;
+  localMailboxForNetwork?: boolean;
+  production?: boolean;
   mailFrom?: string;
   seedDemo?: boolean;
   clientDir?: string;
@@ -44,8 +51,14 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
   let server: Server | undefined;
   try {
     await database.migrate();
-    mail = options.smtpUrl ? undefined : await startMailCapture();
-    mailer = createMailer(options.smtpUrl ?? mail!.url, options.mailFrom ?? 'Canwright <no-reply@canwright.local>');
+    const from = options.mailFrom ?? 'Canwright <no-reply@canwright.local>';
+    const mode: MailboxMode = options.production ? 'off' : mailboxMode({ host: options.host, openToNetwork: options.localMailboxForNetwork ?? false });
+    if (options.smtpUrl) mailer = createMailer(options.smtpUrl, from);
+    else if (mode === 'off') mailer = createNotSentMailer();
+    else {
+      mail = await startMailCapture();
+      mailer = createMailer(mail.url, from);
+    }
 
     // The port is bound before better-auth is made, so that port 0 (tests) still yields a correct base URL.
     // Requests that arrive before the app is ready are told to retry.
@@ -64,7 +77,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       quiet: options.quiet,
     });
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
-    handle = createApp({ database, auth, version, mailCapture: mail, clientDir: options.clientDir });
+    handle = createApp({ database, auth, version, mailbox: mail && { capture: mail, mode }, clientDir: options.clientDir });
 
     const openServer = server;
     const openMailer = mailer;

@@ -48,6 +48,8 @@ const envSchema = z
     MAIL_FROM: z.string().min(3).default('Canwright <no-reply@canwright.local>'),
     BETTER_AUTH_SECRET: z.string().min(32, 'must be at least 32 characters (try: openssl rand -hex 32)').optional(),
     SEED_DEMO: flag.optional(),
+    /** Without SMTP_URL, on a HOST others can reach: let any caller read the local mailbox (a LAN demo). */
+    LOCAL_MAILBOX_FOR_NETWORK: flag.default(false),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;

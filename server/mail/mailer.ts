@@ -22,3 +22,16 @@ export function createMailer(smtpUrl: string, from: string): Mailer {
     close: () => transport.close(),
   };
 }
+
+/**
+ * No SMTP server and no local mailbox: each mail is logged as not sent, with its address and
+ * subject only, never its text (which holds sign-in and reset links).
+ */
+export function createNotSentMailer(log: (line: string) => void = (line) => console.warn(line)): Mailer {
+  return {
+    async send(mail) {
+      log(`Mail not sent (no SMTP_URL set, and no local mailbox on this address): "${mail.subject}" to ${mail.to}`);
+    },
+    close: () => {},
+  };
+}
