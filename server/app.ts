@@ -10,6 +10,7 @@ import type { Database } from './db/database.ts';
 import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { loadSession } from './http/session.ts';
+import { refuseControlCharactersInAddress } from './http/validate.ts';
 import { createDesignLibrary } from './library/design-library.ts';
 import { createDesignRepository } from './library/design-repository.ts';
 import type { MailCapture } from './mail/mail-capture.ts';
@@ -46,6 +47,7 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  app.use('/api', refuseControlCharactersInAddress);
   // better-auth reads its own request bodies, so it is mounted before the JSON parser.
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
   // Render routes parse their own (smaller) bodies and need no session.

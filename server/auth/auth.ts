@@ -1,6 +1,8 @@
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
+import { APIError, createAuthMiddleware } from 'better-auth/api';
 import { admin } from 'better-auth/plugins';
+import { CONTROL_CHARACTER_MESSAGE, findControlCharacter } from '../../shared/validation/control-characters.ts';
 import { verifyCallbackUrl } from '../../shared/account/links.ts';
 import type { Db } from '../db/database.ts';
 import { schema } from '../db/schema.ts';
@@ -36,6 +38,7 @@ export function createAuth(config: AuthConfig) {
     // must exercise the same CSRF protection that production has.
     advanced: { disableOriginCheck: false, disableCSRFCheck: false },
     database: drizzleAdapter(config.db, { provider: 'pg', schema, usePlural: true }),
+    hooks: { before: refuseBadAuthInput },
     user: {
       additionalFields: {
         units: { type: 'string', required: false, defaultValue: 'in', input: false },
@@ -83,3 +86,16 @@ function landOnVerifyPage(link: string): string {
 }
 
 export type Auth = ReturnType<typeof createAuth>;
+
+/**
+ * The same boundary as the app's own routes: no control character in any string of a body, and
+ * a profile's name is text when given (better-auth would pass null on to the database).
+ */
+const refuseBadAuthInput = createAuthMiddleware(async (ctx) => {
+  const body: unknown = ctx.body;
+  const bad = findControlCharacter(body);
+  if (bad !== undefined) throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: `${bad} ${CONTROL_CHARACTER_MESSAGE}.` });
+  if (ctx.path === '/update-user' && body && typeof body === 'object' && 'name' in body && (typeof body.name !== 'string' || body.name.trim() === '')) {
+    throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: 'name must be text (your name as others see it).' });
+  }
+});
