@@ -36,6 +36,9 @@ export interface AppDeps {
   clientDir?: string;
 }
 
+/** The largest request body any API route reads (saved designs have a smaller limit of their own). */
+const BODY_LIMIT = '1mb';
+
 export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -48,13 +51,16 @@ export function createApp(deps: AppDeps): Express {
   );
 
   app.use('/api', refuseControlCharactersInAddress);
-  // better-auth reads its own request bodies, so it is mounted before the JSON parser.
+  // better-auth takes a body parsed before it (better-call reads req.body once the stream is
+  // consumed), so its routes get the same size limit as the rest: 413 past it, before any work.
+  // Every body there is read as JSON, whatever it claims to be, so none goes unparsed and unbounded.
+  app.use('/api/auth', express.json({ limit: BODY_LIMIT, type: () => true }));
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
   // Render routes parse their own (smaller) bodies and need no session.
   app.use('/api/render', renderRoutes());
   // Saved designs are capped at 256 kB: this parser reads them before the general one below.
   app.use('/api/designs', designBodyParser());
-  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api', express.json({ limit: BODY_LIMIT }));
   app.use('/api/health', healthRoutes(deps.database, deps.version));
   const mailbox = deps.mailbox;
   const mayRead = (req: Request) => Boolean(mailbox && mayReadMailbox(mailbox.mode, req));
