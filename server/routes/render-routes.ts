@@ -7,6 +7,8 @@ import { renderCalibrationPdf, renderHoleCsv, renderKitPdf, renderKitSvg, render
 /** A design document is small; anything far larger is refused with 413 before parsing. */
 const RENDER_BODY_LIMIT = '256kb';
 const sheetQuerySchema = z.object({ sheet: z.coerce.number().int().min(1).max(40).default(1) });
+/** A query holds text only: the margin is read as a number, then checked as in a body. */
+const calibrationQuerySchema = printOptionsSchema.extend({ marginMm: z.coerce.number().pipe(printOptionsSchema.shape.marginMm.unwrap()).optional() });
 
 /**
  * Printing needs no account: a visitor can print a kit. Every body is validated with field
@@ -42,7 +44,7 @@ export function renderRoutes(): Router {
   });
 
   router.get('/calibration.pdf', async (req, res) => {
-    const options = parseInput(printOptionsSchema, req.query);
+    const options = printOptionsSchema.parse(parseInput(calibrationQuerySchema, req.query));
     const bytes = await renderCalibrationPdf(options);
     res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': 'attachment; filename="canwright-calibration.pdf"' });
     res.end(Buffer.from(bytes));

@@ -90,4 +90,13 @@ describe('POST /api/render/svg and /holes.csv, GET /api/render/calibration.pdf',
     expect(response.status).toBe(200);
     expect(response.headers.get('content-type')).toBe('application/pdf');
   });
+
+  it('reads the calibration sheet’s margin from the query as a number, and refuses one outside 12.7-40 mm', async () => {
+    // 20 mm: inside the margins the print screen offers (MIN_MARGIN_MM 12.7 = 1/2 in, MAX_MARGIN_MM 40).
+    expect((await http.get('/api/render/calibration.pdf?paper=letter&marginMm=20')).status).toBe(200);
+    const tooSmall = await http.get('/api/render/calibration.pdf?marginMm=3');
+    expect(tooSmall.status).toBe(400);
+    expect(tooSmall.body.error.details.fields[0].path).toBe('marginMm');
+    expect((await http.get('/api/render/calibration.pdf?marginMm=wide')).status).toBe(400);
+  });
 });
