@@ -22,7 +22,10 @@ let running: RunningServer | undefined;
 
 async function main(): Promise<void> {
   mkdirSync(dataDir, { recursive: true });
-  if (!env.DATABASE_URL) lock = lockDataDir(dataDir);
+  if (!env.DATABASE_URL) {
+    lock = lockDataDir(dataDir);
+    if (lock.takenOver) console.log(lock.takenOver);
+  }
 
   if (clientBuildIsStale(root, clientDir)) {
     console.log('Building the web client...');

@@ -5,8 +5,10 @@ import { join, resolve } from 'node:path';
 /**
  * PGlite takes no lock on its folder, and two processes writing one folder lose data.
  * So the server holds a lock file in DATA_DIR for as long as it runs: created with the `wx`
- * flag (fails if it exists), holding our pid. A lock whose pid is gone on this host is stale
- * and taken over.
+ * flag (fails if it exists), holding our pid. A lock whose pid is gone on this host, or is a
+ * zombie (exited, not yet reaped), is stale and taken over. A holder that still runs is given a
+ * short wait first: right after `kill -9` of a whole process group the old server may still be
+ * on its way out, and a restart must not be refused for that.
  */
 export class DataDirLockedError extends Error {
   constructor(
@@ -24,8 +26,14 @@ export class DataDirLockedError extends Error {
 
 export interface DataDirLock {
   path: string;
+  /** Said when the lock was taken over from a server that had exited. */
+  takenOver?: string;
   release(): void;
 }
+
+/** How long a holder that still runs is given to finish exiting (common practice, no source). */
+const EXIT_WAIT_MS = 3000;
+const POLL_MS = 50;
 
 interface LockContents {
   pid: number;
@@ -33,9 +41,10 @@ interface LockContents {
   startedAt: string;
 }
 
-export function lockDataDir(dataDir: string): DataDirLock {
+export function lockDataDir(dataDir: string, { exitWaitMs = EXIT_WAIT_MS }: { exitWaitMs?: number } = {}): DataDirLock {
   mkdirSync(dataDir, { recursive: true });
   const path = join(resolve(dataDir), 'canwright.lock');
+  let takenOver: string | undefined;
   for (let attempt = 0; attempt < 2; attempt++) {
     try {
       const fd = openSync(path, 'wx');
@@ -45,6 +54,7 @@ export function lockDataDir(dataDir: string): DataDirLock {
       let released = false;
       return {
         path,
+        takenOver,
         release() {
           if (released) return;
           released = true;
@@ -54,8 +64,9 @@ export function lockDataDir(dataDir: string): DataDirLock {
     } catch (error) {
       if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
       const holder = readHolder(path);
-      if (holder && isAlive(holder)) throw new DataDirLockedError(path, holder.pid);
+      if (holder && isAlive(holder) && !waitForExit(holder, exitWaitMs)) throw new DataDirLockedError(path, holder.pid);
       if (!holder && Date.now() - statSync(path).mtimeMs < 5000) throw new DataDirLockedError(path, 0); // being written right now
+      if (holder) takenOver = `The server that held the data folder (pid ${holder.pid}, started ${holder.startedAt || 'at an unknown time'}) has exited; this one takes over its lock.`;
       rmSync(path, { force: true }); // stale: its process is gone
     }
   }
@@ -77,8 +88,33 @@ function isAlive(holder: LockContents): boolean {
   if (holder.pid === process.pid) return true;
   try {
     process.kill(holder.pid, 0);
-    return true;
   } catch (error) {
     return (error as NodeJS.ErrnoException).code === 'EPERM';
   }
+  return !isZombie(holder.pid);
+}
+
+/**
+ * Linux: the state letter in /proc/<pid>/stat (proc(5)): Z zombie, X dead. Elsewhere there is
+ * no /proc, and a process that answers signals counts as running.
+ */
+function isZombie(pid: number): boolean {
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const state = stat.slice(stat.lastIndexOf(')') + 2, stat.lastIndexOf(')') + 3);
+    return state === 'Z' || state === 'X';
+  } catch {
+    return false;
+  }
+}
+
+/** True when a holder on this host stops running within `ms`; a holder elsewhere is never waited for. */
+function waitForExit(holder: LockContents, ms: number): boolean {
+  if (holder.pid === process.pid || (holder.host && holder.host !== hostname())) return false;
+  const pause = new Int32Array(new SharedArrayBuffer(4));
+  for (const until = Date.now() + ms; Date.now() < until; ) {
+    Atomics.wait(pause, 0, 0, POLL_MS); // a synchronous sleep: nothing else runs before the lock anyway
+    if (!isAlive(holder)) return true;
+  }
+  return false;
 }
