@@ -9,6 +9,7 @@ import type { Auth } from './auth/auth.ts';
 import type { Database } from './db/database.ts';
 import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { requireSameOrigin } from './http/same-origin.ts';
 import { loadSession } from './http/session.ts';
 import { refuseControlCharactersInAddress } from './http/validate.ts';
 import { createDesignLibrary } from './library/design-library.ts';
@@ -32,6 +33,8 @@ export interface AppDeps {
   version: string;
   /** Present when mail goes to the local capture server: the mailbox, and who may read it. */
   mailbox?: { capture: MailCapture; mode: MailboxMode };
+  /** Origins of our own pages (the public URL and its loopback twin): changes are accepted from these only. */
+  trustedOrigins: readonly string[];
   /** Folder of the built client; omitted in API tests. */
   clientDir?: string;
 }
@@ -51,6 +54,8 @@ export function createApp(deps: AppDeps): Express {
   );
 
   app.use('/api', refuseControlCharactersInAddress);
+  // better-auth checks its own routes by the same rule; this covers every other /api route.
+  app.use('/api', requireSameOrigin(deps.trustedOrigins, { except: '/auth/' }));
   // better-auth takes a body parsed before it (better-call reads req.body once the stream is
   // consumed), so its routes get the same size limit as the rest: 413 past it, before any work.
   // Every body there is read as JSON, whatever it claims to be, so none goes unparsed and unbounded.

@@ -77,7 +77,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       quiet: options.quiet,
     });
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
-    handle = createApp({ database, auth, version, mailbox: mail && { capture: mail, mode }, clientDir: options.clientDir });
+    handle = createApp({ database, auth, version, mailbox: mail && { capture: mail, mode }, trustedOrigins: [url, ...loopbackTwins(url)], clientDir: options.clientDir });
 
     const openServer = server;
     const openMailer = mailer;
