@@ -6,8 +6,8 @@ import { CONTROL_CHARACTER_MESSAGE, findControlCharacter } from '../../shared/va
 import { verifyCallbackUrl } from '../../shared/account/links.ts';
 import type { Db } from '../db/database.ts';
 import { schema } from '../db/schema.ts';
-import type { Mailer } from '../mail/mailer.ts';
-import { passwordResetMail, verificationMail } from '../mail/messages.ts';
+import type { Mailer, OutgoingMail } from '../mail/mailer.ts';
+import { alreadySignedUpMail, passwordResetMail, verificationMail } from '../mail/messages.ts';
 import { accessControl, authRoles } from './roles.ts';
 
 export interface AuthConfig {
@@ -50,15 +50,23 @@ export function createAuth(config: AuthConfig) {
       // NIST SP 800-63B: at least 8 characters, no composition rules.
       minPasswordLength: 8,
       revokeSessionsOnPasswordReset: true,
+      // Mail goes out after the answer, so a known address answers as fast as an unknown one
+      // (the time would otherwise tell who has an account).
       async sendResetPassword({ user, url }) {
-        await config.mailer.send(passwordResetMail(user.email, user.name, url));
+        sendLater(config.mailer, passwordResetMail(user.email, user.name, url));
+      },
+      // The answer for a taken address is made up by better-auth; it must carry the role a new
+      // account gets, or its missing role would tell the two apart.
+      customSyntheticUser: ({ coreFields, additionalFields, id }) => ({ ...coreFields, role: 'maker', ...additionalFields, id }),
+      async onExistingUserSignUp({ user }) {
+        sendLater(config.mailer, alreadySignedUpMail(user.email, user.name, `${config.baseURL}/sign-in`));
       },
     },
     emailVerification: {
       sendOnSignUp: true,
       sendOnSignIn: true,
       async sendVerificationEmail({ user, url }) {
-        await config.mailer.send(verificationMail(user.email, user.name, landOnVerifyPage(url)));
+        sendLater(config.mailer, verificationMail(user.email, user.name, landOnVerifyPage(url)));
       },
     },
     plugins: [
@@ -99,3 +107,8 @@ const refuseBadAuthInput = createAuthMiddleware(async (ctx) => {
     throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: 'name must be text (your name as others see it).' });
   }
 });
+
+/** Sends without holding up the answer; a failure is logged (address and subject only). */
+function sendLater(mailer: Mailer, mail: OutgoingMail): void {
+  mailer.send(mail).catch((error: unknown) => console.error(`Mail "${mail.subject}" to ${mail.to} could not be sent: ${(error as Error).message}`));
+}

@@ -34,3 +34,25 @@ export function passwordResetMail(to: string, name: string, url: string): Outgoi
     ].join('\n'),
   };
 }
+
+/**
+ * Sent when someone signs up with an address that already has an account: the sign-up page
+ * answers as for a new address (so it does not tell who has an account), and the owner learns of
+ * it here, with the way back in.
+ */
+export function alreadySignedUpMail(to: string, name: string, signInUrl: string): OutgoingMail {
+  return {
+    to,
+    subject: 'Your Canwright account already exists',
+    text: [
+      `Hello ${name},`,
+      '',
+      'Someone (hopefully you) tried to create a Canwright account with this address, which already has one.',
+      'Sign in here; if you forgot the password, use "Forgot your password?" on that page:',
+      '',
+      signInUrl,
+      '',
+      'If this was not you, ignore this message: nothing about your account has changed.',
+    ].join('\n'),
+  };
+}
