@@ -21,7 +21,7 @@ describe('changes only from our own pages', () => {
     server = await startTestServer();
     const maker = await createUser(server);
     api = await signedInClient(server, maker);
-    cookie = (api as unknown as { cookies: Map<string, string> }).cookies.size ? [...(api as unknown as { cookies: Map<string, string> }).cookies].map(([k, v]) => `${k}=${v}`).join('; ') : '';
+    cookie = api.cookieHeader;
     expect(cookie).not.toBe('');
   });
   afterAll(() => server.close());

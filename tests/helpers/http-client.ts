@@ -17,10 +17,15 @@ export class HttpClient {
     return [...this.cookies.keys()].some((name) => name.includes('session_token'));
   }
 
+  /** The Cookie header this client sends, for a test that builds a request of its own. */
+  get cookieHeader(): string {
+    return [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');
+  }
+
   async request<T = any>(method: string, path: string, body?: unknown): Promise<HttpResponse<T>> {
     const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json' };
     if (body !== undefined) headers['Content-Type'] = 'application/json';
-    if (this.cookies.size) headers.Cookie = [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');
+    if (this.cookies.size) headers.Cookie = this.cookieHeader;
     const response = await fetch(new URL(path, this.baseUrl), { method, headers, body: body === undefined ? undefined : JSON.stringify(body), redirect: 'manual' });
     for (const cookie of response.headers.getSetCookie()) {
       const [pair = '', ...attributes] = cookie.split(';');
