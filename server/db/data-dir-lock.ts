@@ -82,10 +82,11 @@ function readHolder(path: string): LockContents | undefined {
   }
 }
 
+/** This process, or a pid on another host (a shared network folder) that cannot be checked. */
+const uncheckable = (holder: LockContents) => holder.pid === process.pid || (holder.host !== '' && holder.host !== hostname());
+
 function isAlive(holder: LockContents): boolean {
-  // A pid from another host (a shared network folder) cannot be checked: assume it is alive.
-  if (holder.host && holder.host !== hostname()) return true;
-  if (holder.pid === process.pid) return true;
+  if (uncheckable(holder)) return true;
   try {
     process.kill(holder.pid, 0);
   } catch (error) {
@@ -110,7 +111,7 @@ function isZombie(pid: number): boolean {
 
 /** True when a holder on this host stops running within `ms`; a holder elsewhere is never waited for. */
 function waitForExit(holder: LockContents, ms: number): boolean {
-  if (holder.pid === process.pid || (holder.host && holder.host !== hostname())) return false;
+  if (uncheckable(holder)) return false;
   const pause = new Int32Array(new SharedArrayBuffer(4));
   for (const until = Date.now() + ms; Date.now() < until; ) {
     Atomics.wait(pause, 0, 0, POLL_MS); // a synchronous sleep: nothing else runs before the lock anyway
