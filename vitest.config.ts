@@ -4,6 +4,7 @@ import { defineConfig } from 'vitest/config';
  * Test layers, each a vitest project: unit (pure code), api (the server in-process over HTTP,
  * a fresh in-memory PGlite per file), api-postgres (the same files against a real PostgreSQL
  * server, when TEST_DATABASE_URL is set), render (PDF and SVG output, rasterised and measured),
+ * security (every route for every actor, fuzzed bodies, limits, kill -9 during writes),
  * process (npm start as a real process) and browser (Chromium through playwright-core).
  */
 const postgres = process.env.TEST_DATABASE_URL
@@ -17,6 +18,8 @@ export default defineConfig({
       { test: { name: 'unit', include: ['tests/unit/**/*.test.ts', 'shared/**/*.test.ts'] } },
       { test: { name: 'api', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000 } },
       { test: { name: 'render', include: ['tests/render/**/*.test.ts'], testTimeout: 120_000, hookTimeout: 120_000 } },
+      // Attacks on the server as a whole: every route for every actor, fuzzed bodies, limits, crashes.
+      { test: { name: 'security', include: ['tests/security/**/*.test.ts'], globalSetup: ['tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000 } },
       ...postgres,
       { test: { name: 'process', include: ['tests/process/**/*.test.ts'], globalSetup: ['tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000 } },
       { test: { name: 'browser', include: ['tests/browser/**/*.test.ts'], globalSetup: ['tests/setup/check-browser.ts', 'tests/setup/build-client.ts'], testTimeout: 120_000, hookTimeout: 120_000, fileParallelism: false } },

@@ -9,6 +9,7 @@ import type { Auth } from './auth/auth.ts';
 import type { Database } from './db/database.ts';
 import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { createAppRateLimits, passClientAddress, type RateLimitPolicy } from './http/rate-limits.ts';
 import { requireSameOrigin } from './http/same-origin.ts';
 import { loadSession } from './http/session.ts';
 import { refuseControlCharactersInAddress } from './http/validate.ts';
@@ -35,6 +36,9 @@ export interface AppDeps {
   mailbox?: { capture: MailCapture; mode: MailboxMode };
   /** Origins of our own pages (the public URL and its loopback twin): changes are accepted from these only. */
   trustedOrigins: readonly string[];
+  /** Express's `trust proxy` (TRUST_PROXY): false, a hop count or proxy addresses. */
+  trustProxy: false | number | string[];
+  rateLimits: RateLimitPolicy;
   /** Folder of the built client; omitted in API tests. */
   clientDir?: string;
 }
@@ -45,6 +49,9 @@ const BODY_LIMIT = '1mb';
 export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
+  // req.ip is the socket's address unless TRUST_PROXY names the proxies that may say otherwise.
+  app.set('trust proxy', deps.trustProxy);
+  const limits = createAppRateLimits(deps.database, deps.rateLimits);
   app.use(
     helmet({
       contentSecurityPolicy: { directives: { upgradeInsecureRequests: null, imgSrc: ["'self'", 'data:', 'blob:'] } },
@@ -54,15 +61,20 @@ export function createApp(deps: AppDeps): Express {
   );
 
   app.use('/api', refuseControlCharactersInAddress);
+  app.use('/api', limits.api);
   // better-auth checks its own routes by the same rule; this covers every other /api route.
   app.use('/api', requireSameOrigin(deps.trustedOrigins, { except: '/auth/' }));
   // better-auth takes a body parsed before it (better-call reads req.body once the stream is
   // consumed), so its routes get the same size limit as the rest: 413 past it, before any work.
   // Every body there is read as JSON, whatever it claims to be, so none goes unparsed and unbounded.
   app.use('/api/auth', express.json({ limit: BODY_LIMIT, type: () => true }));
+  // Per account, from any address: failed sign-ins back off, and account mail cannot flood an inbox.
+  app.post('/api/auth/sign-in/email', limits.failedSignInsPerAccount);
+  app.post(['/api/auth/request-password-reset', '/api/auth/send-verification-email'], limits.accountMailPerAccount);
+  app.use('/api/auth', passClientAddress);
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
   // Render routes parse their own (smaller) bodies and need no session.
-  app.use('/api/render', renderRoutes());
+  app.use('/api/render', limits.renders, renderRoutes());
   // Saved designs are capped at 256 kB: this parser reads them before the general one below.
   app.use('/api/designs', designBodyParser());
   app.use('/api', express.json({ limit: BODY_LIMIT }));

@@ -44,7 +44,7 @@ async function main(): Promise<void> {
     mailFrom: env.MAIL_FROM,
     seedDemo: env.SEED_DEMO,
     clientDir,
-    rateLimit: env.NODE_ENV === 'production',
+    trustProxy: env.TRUST_PROXY,
   });
 
   console.log(`\nCanwright is running at ${running.url}`);

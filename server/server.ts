@@ -5,6 +5,7 @@ import { createApp } from './app.ts';
 import { createAuth, type Auth } from './auth/auth.ts';
 import { openDatabase, type Database, type DatabaseTarget } from './db/database.ts';
 import { startMailCapture, type MailCapture } from './mail/mail-capture.ts';
+import { limitsFor, type RateLimitPolicy } from './http/rate-limits.ts';
 import { createMailer, createNotSentMailer, type Mailer } from './mail/mailer.ts';
 import { mailboxMode, type MailboxMode } from './mail/mailbox-policy.ts';
 import { seedDemo } from './seed/seed-demo.ts';
@@ -28,7 +29,10 @@ export interface ServerOptions {
   mailFrom?: string;
   seedDemo?: boolean;
   clientDir?: string;
-  rateLimit?: boolean;
+  /** Rate limits; by default those of the mode (see rate-limits.ts). A benchmark may raise them. */
+  rateLimits?: RateLimitPolicy;
+  /** Express's `trust proxy`: which proxies may say who the client is (TRUST_PROXY). Off by default. */
+  trustProxy?: false | number | string[];
   quiet?: boolean;
 }
 
@@ -67,17 +71,27 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
     await listen(server, options.port, options.host);
     const port = (server.address() as AddressInfo).port;
     const url = (options.publicUrl ?? `http://localhost:${port}`).replace(/\/+$/, '');
+    const rateLimits = options.rateLimits ?? limitsFor(options.production ?? false);
     const auth = createAuth({
       db: database.db,
       mailer,
       secret: options.secret ?? randomBytes(32).toString('hex'),
       baseURL: url,
       trustedOrigins: loopbackTwins(url),
-      rateLimit: options.rateLimit ?? false,
+      rateLimits,
       quiet: options.quiet,
     });
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
-    handle = createApp({ database, auth, version, mailbox: mail && { capture: mail, mode }, trustedOrigins: [url, ...loopbackTwins(url)], clientDir: options.clientDir });
+    handle = createApp({
+      database,
+      auth,
+      version,
+      mailbox: mail && { capture: mail, mode },
+      trustedOrigins: [url, ...loopbackTwins(url)],
+      trustProxy: options.trustProxy ?? false,
+      rateLimits,
+      clientDir: options.clientDir,
+    });
 
     const openServer = server;
     const openMailer = mailer;

@@ -6,6 +6,7 @@ import { CONTROL_CHARACTER_MESSAGE, findControlCharacter } from '../../shared/va
 import { verifyCallbackUrl } from '../../shared/account/links.ts';
 import type { Db } from '../db/database.ts';
 import { schema } from '../db/schema.ts';
+import { CLIENT_ADDRESS_HEADER, type RateLimitPolicy } from '../http/rate-limits.ts';
 import type { Mailer, OutgoingMail } from '../mail/mailer.ts';
 import { alreadySignedUpMail, passwordResetMail, verificationMail } from '../mail/messages.ts';
 import { accessControl, authRoles } from './roles.ts';
@@ -18,8 +19,8 @@ export interface AuthConfig {
   baseURL: string;
   /** Other origins a browser may send sign-in requests from (e.g. 127.0.0.1 beside localhost). */
   trustedOrigins: string[];
-  /** better-auth's own rate limit; on in production. */
-  rateLimit: boolean;
+  /** Limits per client address for sign-in, sign-up and account mail (better-auth counts them in the database). */
+  rateLimits: RateLimitPolicy;
   /** Silence better-auth's log (tests provoke its warnings on purpose). */
   quiet?: boolean;
 }
@@ -33,10 +34,16 @@ export function createAuth(config: AuthConfig) {
     trustedOrigins: config.trustedOrigins,
     telemetry: { enabled: false },
     logger: { disabled: config.quiet ?? false },
-    rateLimit: { enabled: config.rateLimit },
-    // Explicit, because better-auth turns origin checks off when NODE_ENV is "test": the tests
-    // must exercise the same CSRF protection that production has.
-    advanced: { disableOriginCheck: false, disableCSRFCheck: false },
+    rateLimit: authRateLimit(config.rateLimits),
+    advanced: {
+      // Explicit, because better-auth turns origin checks off when NODE_ENV is "test": the tests
+      // must exercise the same CSRF protection that production has.
+      disableOriginCheck: false,
+      disableCSRFCheck: false,
+      // The app writes the address Express derived (TRUST_PROXY) into this header, over anything a
+      // client sent; better-auth's default, X-Forwarded-For, is whatever the client says.
+      ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
+    },
     database: drizzleAdapter(config.db, { provider: 'pg', schema, usePlural: true }),
     hooks: { before: refuseBadAuthInput },
     user: {
@@ -79,6 +86,28 @@ export function createAuth(config: AuthConfig) {
       }),
     ],
   });
+}
+
+/**
+ * better-auth's limits per client address, on in every mode and counted in the database, so that
+ * several servers on one PostgreSQL count together. The session check is left to the app's own
+ * per-address limit: pages ask for it on every load.
+ */
+function authRateLimit(policy: RateLimitPolicy) {
+  const perMinute = (max: number) => ({ window: 60, max });
+  return {
+    enabled: true,
+    storage: 'database' as const,
+    window: 60,
+    max: policy.apiPerAddress,
+    customRules: {
+      '/get-session': false as const,
+      '/sign-in/*': perMinute(policy.signInsPerAddress),
+      '/sign-up/*': perMinute(policy.signUpsPerAddress),
+      '/request-password-reset': perMinute(policy.accountMailPerAddress),
+      '/send-verification-email': perMinute(policy.accountMailPerAddress),
+    },
+  };
 }
 
 /**

@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import { z } from 'zod';
 
 /**
@@ -36,6 +37,35 @@ const flag = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'], { message: 'must be true or false' })
   .transform((value) => value === 'true' || value === '1' || value === 'yes');
 
+const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+const TRUST_PROXY_HELP =
+  'must be off, a number of proxy hops (e.g. 1), or a comma-separated list of proxy addresses or ranges (e.g. 10.0.0.5, 10.1.0.0/16, loopback)';
+
+/** An address, an address range (CIDR), or a name Express knows for one. */
+function isProxyAddress(entry: string): boolean {
+  if (PROXY_NAMES.has(entry)) return true;
+  const [address = '', prefix, ...rest] = entry.split('/');
+  const family = isIP(address);
+  if (family === 0 || rest.length > 0) return false;
+  return prefix === undefined || (/^\d+$/.test(prefix) && Number(prefix) <= (family === 4 ? 32 : 128));
+}
+
+/**
+ * Which proxies in front of the server may say who the client is (X-Forwarded-For), in the form
+ * Express's `trust proxy` takes: off (the default: the socket's address is the client), a hop
+ * count, or a list of proxy addresses. "true" (trust every hop) is refused: with it any client
+ * chooses its own address, and so escapes every per-address limit.
+ */
+const trustProxy = z.string().transform((value, ctx): false | number | string[] => {
+  const text = value.trim().toLowerCase();
+  if (['off', 'false', 'no', '0'].includes(text)) return false;
+  if (/^\d+$/.test(text)) return Number(text);
+  const entries = text.split(',').map((entry) => entry.trim()).filter(Boolean);
+  if (text === 'true' || text === 'yes') ctx.addIssue({ code: 'custom', message: `${TRUST_PROXY_HELP}; "true" would let any client choose its own address` });
+  else if (entries.length === 0 || !entries.every(isProxyAddress)) ctx.addIssue({ code: 'custom', message: TRUST_PROXY_HELP });
+  return entries;
+});
+
 const envSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'production', 'test'], { message: 'must be development, production or test' }).default('development'),
@@ -50,6 +80,7 @@ const envSchema = z
     SEED_DEMO: flag.optional(),
     /** Without SMTP_URL, on a HOST others can reach: let any caller read the local mailbox (a LAN demo). */
     LOCAL_MAILBOX_FOR_NETWORK: flag.default(false),
+    TRUST_PROXY: trustProxy.default(false),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;

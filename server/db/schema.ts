@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, unique, uniqueIndex } from 'drizzle-orm/pg-core';
+import { bigint, boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, unique, uniqueIndex } from 'drizzle-orm/pg-core';
 import type { Design } from '../../shared/design/design-schema.ts';
 import type { DesignSummary } from '../../shared/library/library-schemas.ts';
 
@@ -143,4 +143,22 @@ export const designVersions = pgTable(
   (table) => [unique('design_versions_design_number_unique').on(table.designId, table.number)],
 );
 
-export const schema = { users, sessions, accounts, verifications, printerProfiles, designs, designVersions };
+/**
+ * better-auth's rate-limit counts (its "database" storage), so that every server on one database
+ * counts the same sign-in tries. last_request is a time in milliseconds since 1970, as better-auth keeps it.
+ */
+export const rateLimits = pgTable('rate_limits', {
+  id: text('id').primaryKey(),
+  key: text('key').notNull().unique(),
+  count: integer('count').notNull(),
+  lastRequest: bigint('last_request', { mode: 'number' }).notNull(),
+});
+
+/** Counts of Canwright's own rate limits (express-rate-limit) when several servers share a PostgreSQL database. */
+export const requestCounts = pgTable('request_counts', {
+  key: text('key').primaryKey(),
+  hits: integer('hits').notNull(),
+  resetAt: timestamp('reset_at', { withTimezone: true }).notNull(),
+});
+
+export const schema = { users, sessions, accounts, verifications, rateLimits, printerProfiles, designs, designVersions, requestCounts };

@@ -11,7 +11,11 @@ export interface HttpResponse<T = unknown> {
 export class HttpClient {
   private cookies = new Map<string, string>();
 
-  constructor(readonly baseUrl: string) {}
+  /** Headers sent with every request, e.g. an X-Forwarded-For a test forges or a proxy would add. */
+  constructor(
+    readonly baseUrl: string,
+    readonly extraHeaders: Record<string, string> = {},
+  ) {}
 
   get signedIn(): boolean {
     return [...this.cookies.keys()].some((name) => name.includes('session_token'));
@@ -23,7 +27,7 @@ export class HttpClient {
   }
 
   async request<T = any>(method: string, path: string, body?: unknown): Promise<HttpResponse<T>> {
-    const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json' };
+    const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json', ...this.extraHeaders };
     if (body !== undefined) headers['Content-Type'] = 'application/json';
     if (this.cookies.size) headers.Cookie = this.cookieHeader;
     const response = await fetch(new URL(path, this.baseUrl), { method, headers, body: body === undefined ? undefined : JSON.stringify(body), redirect: 'manual' });

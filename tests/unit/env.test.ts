@@ -51,3 +51,27 @@ describe('parseEnv', () => {
     expect(result.ok && result.env.PORT).toBe(3000);
   });
 });
+
+describe('TRUST_PROXY', () => {
+  // Express's "trust proxy" setting takes a hop count or a list of addresses (expressjs.com, "Express behind proxies").
+  it('is off by default, and takes a hop count or a list of proxy addresses as Express does', () => {
+    const read = (TRUST_PROXY?: string) => {
+      const result = parseEnv(TRUST_PROXY === undefined ? {} : { TRUST_PROXY });
+      return result.ok ? result.env.TRUST_PROXY : result.problems;
+    };
+    expect(read()).toBe(false);
+    expect(read('off')).toBe(false);
+    expect(read('1')).toBe(1);
+    expect(read('2')).toBe(2);
+    expect(read('10.0.0.5, 10.1.0.0/16,loopback')).toEqual(['10.0.0.5', '10.1.0.0/16', 'loopback']);
+    expect(read('::1, fd00::/8')).toEqual(['::1', 'fd00::/8']);
+  });
+
+  it('refuses "true" (any client would choose its own address) and anything that is not an address', () => {
+    for (const TRUST_PROXY of ['true', 'proxy.example.org', '10.0.0.0/33', '10.0.0.1/8/2', '1.2.3']) {
+      const result = parseEnv({ TRUST_PROXY });
+      expect(result.ok, TRUST_PROXY).toBe(false);
+      if (!result.ok) expect(result.problems[0]).toMatch(/^TRUST_PROXY: must be off, a number of proxy hops/);
+    }
+  });
+});
