@@ -25,6 +25,7 @@ import { designBodyParser, designRoutes } from './routes/design-routes.ts';
 import { devMailRoutes } from './routes/dev-mail-routes.ts';
 import { healthRoutes } from './routes/health-routes.ts';
 import { printerProfileRoutes } from './routes/printer-profile-routes.ts';
+import type { RenderPool } from './render/render-pool.ts';
 import { renderRoutes } from './routes/render-routes.ts';
 import { sharedDesignRoutes } from './routes/shared-design-routes.ts';
 
@@ -39,6 +40,8 @@ export interface AppDeps {
   /** Express's `trust proxy` (TRUST_PROXY): false, a hop count or proxy addresses. */
   trustProxy: false | number | string[];
   rateLimits: RateLimitPolicy;
+  /** Worker threads that draw kits. */
+  renderPool: RenderPool;
   /** Folder of the built client; omitted in API tests. */
   clientDir?: string;
 }
@@ -74,7 +77,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/auth', passClientAddress);
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
   // Render routes parse their own (smaller) bodies and need no session.
-  app.use('/api/render', limits.renders, renderRoutes());
+  app.use('/api/render', limits.renders, renderRoutes(deps.renderPool));
   // Saved designs are capped at 256 kB: this parser reads them before the general one below.
   app.use('/api/designs', designBodyParser());
   app.use('/api', express.json({ limit: BODY_LIMIT }));

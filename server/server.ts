@@ -8,6 +8,7 @@ import { startMailCapture, type MailCapture } from './mail/mail-capture.ts';
 import { limitsFor, type RateLimitPolicy } from './http/rate-limits.ts';
 import { createMailer, createNotSentMailer, type Mailer } from './mail/mailer.ts';
 import { mailboxMode, type MailboxMode } from './mail/mailbox-policy.ts';
+import { createRenderPool, type RenderPool, type RenderPoolOptions } from './render/render-pool.ts';
 import { seedDemo } from './seed/seed-demo.ts';
 import { version } from './version.ts';
 
@@ -34,6 +35,8 @@ export interface ServerOptions {
   /** Express's `trust proxy`: which proxies may say who the client is (TRUST_PROXY). Off by default. */
   trustProxy?: false | number | string[];
   quiet?: boolean;
+  /** Render threads and queue; by default from the CPU count. */
+  renderPool?: RenderPoolOptions;
 }
 
 export interface RunningServer {
@@ -53,6 +56,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
   let mail: MailCapture | undefined;
   let mailer: Mailer | undefined;
   let server: Server | undefined;
+  let renderPool: RenderPool | undefined;
   try {
     await database.migrate();
     const from = options.mailFrom ?? 'Canwright <no-reply@canwright.local>';
@@ -81,6 +85,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       rateLimits,
       quiet: options.quiet,
     });
+    renderPool = createRenderPool(options.renderPool);
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
     handle = createApp({
       database,
@@ -90,12 +95,14 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       trustedOrigins: [url, ...loopbackTwins(url)],
       trustProxy: options.trustProxy ?? false,
       rateLimits,
+      renderPool,
       clientDir: options.clientDir,
     });
 
     const openServer = server;
     const openMailer = mailer;
     const openMail = mail;
+    const openPool = renderPool;
     let closing: Promise<void> | undefined;
     return {
       url,
@@ -109,6 +116,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
           openServer.closeAllConnections();
           await new Promise<void>((resolve) => openServer.close(() => resolve()));
           openMailer.close();
+          await openPool.close();
           await openMail?.close();
           await database.close();
         })();
@@ -117,6 +125,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
     };
   } catch (error) {
     server?.close();
+    await renderPool?.close();
     mailer?.close();
     await mail?.close();
     await database.close();

@@ -5,6 +5,8 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly details?: unknown,
+    /** Headers the answer carries, e.g. Retry-After on a 503. */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
     this.name = 'AppError';

@@ -9,6 +9,7 @@ export const apiNotFound: RequestHandler = (req, res) => {
 export const errorHandler: ErrorRequestHandler = (error, _req, res, next) => {
   if (res.headersSent) return next(error);
   if (error instanceof AppError) {
+    if (error.headers) res.set(error.headers);
     res.status(error.status).json({ error: { code: error.code, message: error.message, ...(error.details ? { details: error.details } : {}) } });
     return;
   }

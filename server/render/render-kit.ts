@@ -62,6 +62,20 @@ export function renderKitSvg(input: RenderRequest, today?: Date): { sheets: stri
   return { sheets, fileStem: fileStem(design.name) };
 }
 
+/**
+ * One sheet of the kit as SVG. The sheet is looked up in the plan before anything is drawn, so a
+ * sheet that does not exist costs a layout, not a render.
+ */
+export function renderKitSvgSheet(input: RenderRequest, sheet: number, today?: Date): { svg: string; sheets: number; fileStem: string } {
+  const { design, plan } = prepareKit(input, today);
+  const count = plan.imposition.sheets.length;
+  const found = plan.imposition.sheets[sheet - 1];
+  if (!found) throw new AppError(404, 'NOT_FOUND', `This kit has ${count} sheet${count === 1 ? '' : 's'}; there is no sheet ${sheet}.`);
+  const svg = createSvgSheet(found.widthMm, found.heightMm, { title: `${design.name}: sheet ${sheet} of ${count}`, transform: plan.transform });
+  plan.drawSheet(sheet - 1, svg.context);
+  return { svg: svg.toString(), sheets: count, fileStem: fileStem(design.name) };
+}
+
 export function renderHoleCsv(input: RenderRequest): { csv: string; fileName: string } {
   const design = validDesign(renderRequestSchema.parse(input).design);
   return { csv: formatHoleCsv(layoutDesign(design)), fileName: `${fileStem(design.name)}-holes.csv` };

@@ -1,8 +1,9 @@
-import express, { Router } from 'express';
+import express, { Router, type Response } from 'express';
 import { z } from 'zod';
 import { printOptionsSchema } from '../../shared/print/index.ts';
 import { parseInput } from '../http/validate.ts';
-import { renderCalibrationPdf, renderHoleCsv, renderKitPdf, renderKitSvg, renderRequestSchema } from '../render/render-kit.ts';
+import { renderRequestSchema } from '../render/render-kit.ts';
+import { busy, type RenderPool } from '../render/render-pool.ts';
 
 /** A design document is small; anything far larger is refused with 413 before parsing. */
 const RENDER_BODY_LIMIT = '256kb';
@@ -11,43 +12,54 @@ const sheetQuerySchema = z.object({ sheet: z.coerce.number().int().min(1).max(40
 const calibrationQuerySchema = printOptionsSchema.extend({ marginMm: z.coerce.number().pipe(printOptionsSchema.shape.marginMm.unwrap()).optional() });
 
 /**
- * Printing needs no account: a visitor can print a kit. Every body is validated with field
- * paths; a design that cannot be laid out or imposed gets 422 with the reason.
+ * Printing needs no account: a visitor can print a kit. The request (body, sheet, paper) is
+ * checked here before any work; the layout and the drawing run in the render pool's threads.
+ * A design that cannot be laid out or imposed gets 422 with the reason, a full pool 503.
  */
-export function renderRoutes(): Router {
+export function renderRoutes(pool: RenderPool): Router {
   const router = Router();
+  // A full pool refuses before the body is even read.
+  router.use((_req, _res, next) => next(pool.full ? busy() : undefined));
   router.use(express.json({ limit: RENDER_BODY_LIMIT }));
 
   router.post('/pdf', async (req, res) => {
-    const { bytes, fileName, sheets } = await renderKitPdf(parseInput(renderRequestSchema, req.body));
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${fileName}"`, 'X-Sheet-Count': String(sheets), 'Cache-Control': 'no-store' });
-    res.end(Buffer.from(bytes));
+    const result = await pool.run({ kind: 'pdf', request: parseInput(renderRequestSchema, req.body) }, abandonedWith(res));
+    if (result.kind !== 'pdf') return;
+    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Sheet-Count': String(result.sheets), 'Cache-Control': 'no-store' });
+    res.end(Buffer.from(result.bytes));
   });
 
-  router.post('/svg', (req, res) => {
-    const body = parseInput(renderRequestSchema, req.body);
-    const sheet = parseInput(sheetQuerySchema, req.query).sheet;
-    const { sheets, fileStem } = renderKitSvg(body);
-    const svg = sheets[sheet - 1];
-    if (!svg) {
-      res.status(404).json({ error: { code: 'NOT_FOUND', message: `This kit has ${sheets.length} sheets; there is no sheet ${sheet}.` } });
-      return;
-    }
-    res.set({ 'Content-Type': 'image/svg+xml; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileStem}-sheet-${sheet}.svg"`, 'X-Sheet-Count': String(sheets.length) });
-    res.send(svg);
+  router.post('/svg', async (req, res) => {
+    const request = parseInput(renderRequestSchema, req.body);
+    const { sheet } = parseInput(sheetQuerySchema, req.query);
+    const result = await pool.run({ kind: 'svg', request, sheet }, abandonedWith(res));
+    if (result.kind !== 'svg') return;
+    res.set({ 'Content-Type': 'image/svg+xml; charset=utf-8', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Sheet-Count': String(result.sheets) });
+    res.send(result.svg);
   });
 
-  router.post('/holes.csv', (req, res) => {
-    const { csv, fileName } = renderHoleCsv(parseInput(renderRequestSchema, req.body));
-    res.set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"` });
-    res.send(csv);
+  router.post('/holes.csv', async (req, res) => {
+    const result = await pool.run({ kind: 'csv', request: parseInput(renderRequestSchema, req.body) }, abandonedWith(res));
+    if (result.kind !== 'csv') return;
+    res.set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${result.fileName}"` });
+    res.send(result.csv);
   });
 
   router.get('/calibration.pdf', async (req, res) => {
     const options = printOptionsSchema.parse(parseInput(calibrationQuerySchema, req.query));
-    const bytes = await renderCalibrationPdf(options);
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': 'attachment; filename="canwright-calibration.pdf"' });
-    res.end(Buffer.from(bytes));
+    const result = await pool.run({ kind: 'calibration', options }, abandonedWith(res));
+    if (result.kind !== 'calibration') return;
+    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"` });
+    res.end(Buffer.from(result.bytes));
   });
   return router;
+}
+
+/** A signal that fires when the client goes away before its answer: its render leaves the queue. */
+function abandonedWith(res: Response): AbortSignal {
+  const controller = new AbortController();
+  res.on('close', () => {
+    if (!res.writableFinished) controller.abort();
+  });
+  return controller.signal;
 }
