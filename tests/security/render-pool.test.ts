@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { createRenderPool } from '../../server/render/render-pool.ts';
+import type * as SvgWriter from '../../server/render/svg/svg-writer.ts';
 import { wallOfHoles } from '../../src/features/preview/demo-designs.ts';
 import { HttpClient } from '../helpers/http-client.ts';
 import { startTestServer, type TestServer } from '../helpers/test-server.ts';
@@ -48,7 +49,7 @@ describe('a request for a sheet the kit does not have', () => {
     vi.resetModules();
     const drawn = vi.fn();
     vi.doMock('../../server/render/svg/svg-writer.ts', async (original) => {
-      const real = await original<typeof import('../../server/render/svg/svg-writer.ts')>();
+      const real = await original<typeof SvgWriter>();
       return { ...real, createSvgSheet: (...args: Parameters<typeof real.createSvgSheet>) => (drawn(), real.createSvgSheet(...args)) };
     });
     const { runRenderTask } = await import('../../server/render/render-tasks.ts');
