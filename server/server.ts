@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import type { Express } from 'express';
 import { createApp } from './app.ts';
 import { createAuth, type Auth } from './auth/auth.ts';
 import { openDatabase, type Database, type DatabaseTarget } from './db/database.ts';
@@ -44,6 +45,8 @@ export interface RunningServer {
   port: number;
   database: Database;
   auth: Auth;
+  /** The Express app itself (its route table is read by the security tests). */
+  app: Express;
   /** Present when mail is captured locally. */
   mail?: MailCapture;
   seeded: string[];
@@ -87,7 +90,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
     });
     renderPool = createRenderPool(options.renderPool);
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
-    handle = createApp({
+    const app = createApp({
       database,
       auth,
       version,
@@ -98,6 +101,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       renderPool,
       clientDir: options.clientDir,
     });
+    handle = app;
 
     const openServer = server;
     const openMailer = mailer;
@@ -109,6 +113,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       port,
       database,
       auth,
+      app,
       mail,
       seeded,
       close() {

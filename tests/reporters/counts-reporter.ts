@@ -1,4 +1,5 @@
 import type { Reporter, SerializedError, TestModule } from 'vitest/node';
+import '../helpers/security-counts.ts';
 
 /**
  * Prints how many tests passed, failed and were skipped in each layer (unit, api, browser...),
@@ -19,6 +20,9 @@ export default class CountsReporter implements Reporter {
       if (module.state() === 'failed' && [...module.children.allTests()].length === 0) counts.failed++;
       byProject.set(module.project.name, counts);
     }
+    const figures: string[] = [];
+    for (const module of testModules) for (const test of module.children.allTests()) for (const [name, text] of Object.entries(test.meta().securityCounts ?? {})) figures.push(`  ${name}: ${text}`);
+    if (figures.length) console.log(['\nSecurity layer:', ...figures.sort()].join('\n'));
     const total = { passed: 0, failed: 0, skipped: 0 };
     console.log('\nTests by layer:');
     for (const [name, counts] of [...byProject].sort(([a], [b]) => a.localeCompare(b))) {
