@@ -10,10 +10,14 @@ export interface StartedProcess {
   exited: Promise<number | null>;
 }
 
-/** Runs `npm start`'s script (node scripts/start.mjs) with extra environment, capturing its output. */
-export function runStart(env: Record<string, string>): StartedProcess {
+/**
+ * Runs `npm start`'s script (node scripts/start.mjs) with extra environment, capturing its output.
+ * `ownGroup` starts it in a process group of its own, so a test can kill the whole group at once.
+ */
+export function runStart(env: Record<string, string>, { ownGroup = false } = {}): StartedProcess {
   const child = spawn(process.execPath, ['scripts/start.mjs'], {
     cwd: repoRoot,
+    detached: ownGroup,
     env: { ...process.env, NODE_ENV: 'development', CI: '', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
