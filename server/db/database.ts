@@ -51,10 +51,31 @@ function openPostgres(url: string): Database {
   return {
     db: db as unknown as Db,
     kind: 'postgres',
-    migrate: () => migratePostgres(db, { migrationsFolder }),
+    migrate: () => migrateOneAtATime(pool, () => migratePostgres(db, { migrationsFolder })),
     ping: () => ping(db as unknown as Db),
     close: () => pool.end(),
   };
+}
+
+/** Any number that names Canwright's migrations among the advisory locks of a database. */
+const MIGRATION_LOCK = 7_245_091;
+
+/**
+ * Several servers may start at once against one database: an advisory lock (PostgreSQL manual,
+ * "Advisory Locks") lets one apply the migrations while the others wait, then find nothing to do.
+ */
+async function migrateOneAtATime(pool: pg.Pool, migrate: () => Promise<void>): Promise<void> {
+  const client = await pool.connect();
+  try {
+    await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK]);
+    try {
+      await migrate();
+    } finally {
+      await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK]);
+    }
+  } finally {
+    client.release();
+  }
 }
 
 async function ping(db: Db): Promise<boolean> {

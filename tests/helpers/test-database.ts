@@ -8,6 +8,11 @@ import type { DatabaseTarget } from '../../server/db/database.ts';
  */
 export async function createTestDatabase(): Promise<{ target: DatabaseTarget; drop(): Promise<void> }> {
   if (process.env.TEST_DB !== 'postgres') return { target: { kind: 'memory' }, drop: async () => undefined };
+  return createPostgresTestDatabase();
+}
+
+/** A fresh database on the PostgreSQL server at TEST_DATABASE_URL, whatever TEST_DB says. */
+export async function createPostgresTestDatabase(): Promise<{ target: DatabaseTarget & { kind: 'postgres' }; drop(): Promise<void> }> {
   const adminUrl = process.env.TEST_DATABASE_URL;
   if (!adminUrl) throw new Error('TEST_DB=postgres needs TEST_DATABASE_URL');
   const name = `canwright_test_${randomBytes(6).toString('hex')}`;
@@ -15,7 +20,7 @@ export async function createTestDatabase(): Promise<{ target: DatabaseTarget; dr
   const url = new URL(adminUrl);
   url.pathname = `/${name}`;
   return {
-    target: { kind: 'postgres', url: url.toString() },
+    target: { kind: 'postgres' as const, url: url.toString() },
     drop: () => withClient(adminUrl, (client) => client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`)).then(() => undefined),
   };
 }
