@@ -7,8 +7,13 @@ import { defineConfig } from 'vitest/config';
  * security (every route for every actor, fuzzed bodies, limits, kill -9 during writes),
  * process (npm start as a real process) and browser (Chromium through playwright-core).
  */
+/** Security files that talk to one in-process server also run on PostgreSQL. */
+const securityOnPostgres = ['route-matrix', 'control-characters', 'body-limits', 'same-origin', 'local-mailbox'].map((name) => `tests/security/${name}.test.ts`);
 const postgres = process.env.TEST_DATABASE_URL
-  ? [{ test: { name: 'api-postgres', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000, env: { TEST_DB: 'postgres' } } }]
+  ? [
+      { test: { name: 'api-postgres', include: ['tests/api/**/*.test.ts'], testTimeout: 30_000, hookTimeout: 60_000, env: { TEST_DB: 'postgres' } } },
+      { test: { name: 'security-postgres', include: securityOnPostgres, testTimeout: 60_000, hookTimeout: 60_000, env: { TEST_DB: 'postgres' } } },
+    ]
   : [];
 
 export default defineConfig({

@@ -26,13 +26,13 @@ export default class CountsReporter implements Reporter {
     const total = { passed: 0, failed: 0, skipped: 0 };
     console.log('\nTests by layer:');
     for (const [name, counts] of [...byProject].sort(([a], [b]) => a.localeCompare(b))) {
-      console.log(`  ${name.padEnd(14)} ${counts.passed} passed, ${counts.failed} failed, ${counts.skipped} skipped`);
+      console.log(`  ${name.padEnd(18)} ${counts.passed} passed, ${counts.failed} failed, ${counts.skipped} skipped`);
       total.passed += counts.passed;
       total.failed += counts.failed;
       total.skipped += counts.skipped;
     }
     // Errors outside any test (a failing global setup, say) fail the run too.
-    if (unhandledErrors.length) console.log(`  ${'(outside tests)'.padEnd(14)} ${unhandledErrors.length} errors`);
+    if (unhandledErrors.length) console.log(`  ${'(outside tests)'.padEnd(18)} ${unhandledErrors.length} errors`);
     total.failed += unhandledErrors.length;
     console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
   }
