@@ -44,3 +44,21 @@ export async function apiRequest<S extends z.ZodType>(path: string, schema: S, o
   console.error(`Unexpected answer from ${path}`, parsed.error.issues);
   throw new ApiError(response.status, 'UNEXPECTED_ANSWER', 'The server sent an answer this page does not understand. Reload the page; if it keeps happening, the server may be updating.');
 }
+
+/**
+ * fetch, asking again when the server says it is busy (503 or 429 with a short Retry-After), as a
+ * person would after a moment; after the last try the busy answer is returned as it came.
+ */
+export async function fetchRetryingWhenBusy(
+  input: string,
+  init: RequestInit,
+  { tries = 3, longestWaitSeconds = 10, sleep = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms)) } = {},
+): Promise<Response> {
+  for (let attempt = 1; ; attempt++) {
+    const response = await fetch(input, init);
+    const wait = Number(response.headers.get('retry-after'));
+    const busy = (response.status === 503 || response.status === 429) && Number.isFinite(wait) && wait > 0 && wait <= longestWaitSeconds;
+    if (!busy || attempt >= tries || init.signal?.aborted) return response;
+    await sleep(wait * 1000);
+  }
+}

@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { z } from 'zod';
-import { ApiError, apiRequest } from '../../../src/lib/api-client.ts';
+import { ApiError, apiRequest, fetchRetryingWhenBusy } from '../../../src/lib/api-client.ts';
 
 const answer = (status: number, body: unknown) => vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } }));
 
@@ -25,5 +25,31 @@ describe('apiRequest', () => {
   it('passes the server’s own message of an error answer on', async () => {
     vi.stubGlobal('fetch', answer(409, { error: { code: 'NO_CHANGE', message: 'Nothing changed since version 2.' } }));
     await expect(apiRequest('/api/designs/d1/versions', z.object({}), { method: 'POST', body: {} })).rejects.toMatchObject({ status: 409, code: 'NO_CHANGE', message: 'Nothing changed since version 2.' });
+  });
+});
+
+describe('fetchRetryingWhenBusy', () => {
+  afterEach(() => vi.unstubAllGlobals());
+  const busy = () => new Response('{}', { status: 503, headers: { 'Retry-After': '2' } });
+
+  it('asks again after the Retry-After a busy server gives (RFC 9110, 10.2.3), and returns the answer that came', async () => {
+    const fetch = vi.fn().mockResolvedValueOnce(busy()).mockResolvedValueOnce(new Response('%PDF', { status: 200 }));
+    vi.stubGlobal('fetch', fetch);
+    const sleep = vi.fn(async () => undefined);
+    const response = await fetchRetryingWhenBusy('/api/render/pdf', { method: 'POST' }, { sleep });
+    expect(response.status).toBe(200);
+    expect(sleep).toHaveBeenCalledWith(2000);
+    expect(fetch).toHaveBeenCalledTimes(2);
+  });
+
+  it('gives up after its tries, and never waits on an answer that is not "busy"', async () => {
+    vi.stubGlobal('fetch', vi.fn(async () => busy()));
+    const sleep = vi.fn(async () => undefined);
+    expect((await fetchRetryingWhenBusy('/x', {}, { tries: 3, sleep })).status).toBe(503);
+    expect(sleep).toHaveBeenCalledTimes(2);
+    vi.stubGlobal('fetch', vi.fn(async () => new Response('{}', { status: 503 })));
+    const noWait = vi.fn(async () => undefined);
+    expect((await fetchRetryingWhenBusy('/x', {}, { sleep: noWait })).status).toBe(503);
+    expect(noWait).not.toHaveBeenCalled();
   });
 });

@@ -1,7 +1,7 @@
 import type { DesignInput } from '../../../../shared/design/design-schema.ts';
 import type { PrintOptions } from '../../../../shared/print/paper.ts';
 import type { PrinterProfileInput } from '../../../../shared/print/printer-profile.ts';
-import { ApiError } from '../../../lib/api-client.ts';
+import { ApiError, fetchRetryingWhenBusy } from '../../../lib/api-client.ts';
 
 export type KitFormat = 'pdf' | 'svg' | 'csv';
 
@@ -19,7 +19,8 @@ const paths: Record<KitFormat, string> = { pdf: '/api/render/pdf', svg: '/api/re
 /** Asks the server for the kit file and hands it to the browser as a download. */
 export async function downloadKit(format: KitFormat, request: KitRequest): Promise<{ fileName: string; sheets: number }> {
   const query = format === 'svg' ? `?sheet=${request.sheet ?? 1}` : '';
-  const response = await fetch(paths[format] + query, {
+  // A busy server (every render thread taken) asks to wait a moment: the download tries again by itself.
+  const response = await fetchRetryingWhenBusy(paths[format] + query, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json' },
     body: JSON.stringify({ design: request.design, print: request.print, printer: request.printer, version: request.version }),
