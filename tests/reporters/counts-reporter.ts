@@ -21,7 +21,7 @@ export default class CountsReporter implements Reporter {
       byProject.set(module.project.name, counts);
     }
     const figures: string[] = [];
-    for (const module of testModules) for (const test of module.children.allTests()) for (const [name, text] of Object.entries(test.meta().securityCounts ?? {})) figures.push(`  ${name}: ${text}`);
+    for (const module of testModules) for (const test of module.children.allTests()) for (const [name, text] of Object.entries(test.meta().securityCounts ?? {})) figures.push(`  ${name} (${module.project.name}): ${text}`);
     if (figures.length) console.log(['\nSecurity layer:', ...figures.sort()].join('\n'));
     const total = { passed: 0, failed: 0, skipped: 0 };
     console.log('\nTests by layer:');
