@@ -1,6 +1,7 @@
 import type { RequestHandler } from 'express';
 import type { z } from 'zod';
 import { CONTROL_CHARACTER_MESSAGE, findControlCharacter, hasControlCharacter } from '../../shared/validation/control-characters.ts';
+import { plainIssueMessage } from '../../shared/validation/plain-issues.ts';
 import { AppError } from './app-error.ts';
 
 const refuse = (path: string) => new AppError(400, 'INVALID_INPUT', 'Some fields are not valid.', { fields: [{ path, message: CONTROL_CHARACTER_MESSAGE }] });
@@ -12,7 +13,7 @@ export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.ou
   if (bad !== undefined) throw refuse(bad);
   const result = schema.safeParse(input);
   if (result.success) return result.data;
-  const fields = result.error.issues.map((issue) => ({ path: issue.path.join('.') || '(body)', message: issue.message }));
+  const fields = result.error.issues.map((issue) => ({ path: issue.path.join('.') || '(body)', message: plainIssueMessage(issue) }));
   throw new AppError(400, 'INVALID_INPUT', 'Some fields are not valid.', { fields });
 }
 
