@@ -13,6 +13,8 @@ import { createAppRateLimits, passClientAddress, type RateLimitPolicy } from './
 import { requireSameOrigin } from './http/same-origin.ts';
 import { loadSession } from './http/session.ts';
 import { refuseControlCharactersInAddress } from './http/validate.ts';
+import { createBurnLog } from './burns/burn-log.ts';
+import { createBurnRepository } from './burns/burn-repository.ts';
 import { createDesignLibrary } from './library/design-library.ts';
 import { createDesignRepository } from './library/design-repository.ts';
 import type { MailCapture } from './mail/mail-capture.ts';
@@ -21,11 +23,13 @@ import { createPrinterProfileRepository } from './printer-profiles/printer-profi
 import { createPrinterProfileUseCases } from './printer-profiles/printer-profile-use-cases.ts';
 import { accountRoutes } from './routes/account-routes.ts';
 import { adminRoutes } from './routes/admin-routes.ts';
+import { burnRoutes } from './routes/burn-routes.ts';
 import { designBodyParser, designRoutes } from './routes/design-routes.ts';
 import { devMailRoutes } from './routes/dev-mail-routes.ts';
 import { healthRoutes } from './routes/health-routes.ts';
 import { printerProfileRoutes } from './routes/printer-profile-routes.ts';
 import type { RenderPool } from './render/render-pool.ts';
+import type { ObjectStore } from './storage/object-store.ts';
 import { renderRoutes } from './routes/render-routes.ts';
 import { sharedDesignRoutes } from './routes/shared-design-routes.ts';
 
@@ -40,6 +44,8 @@ export interface AppDeps {
   /** Express's `trust proxy` (TRUST_PROXY): false, a hop count or proxy addresses. */
   trustProxy: false | number | string[];
   rateLimits: RateLimitPolicy;
+  /** Where uploaded files (burn photos) are kept. */
+  store: ObjectStore;
   /** Worker threads that draw kits. */
   renderPool: RenderPool;
   /** Folder of the built client; omitted in API tests. */
@@ -92,8 +98,10 @@ export function createApp(deps: AppDeps): Express {
   const db = deps.database.db;
   app.use('/api/account', accountRoutes(createAccountUseCases(createAccountRepository(db))));
   app.use('/api/printer-profiles', printerProfileRoutes(createPrinterProfileUseCases(createPrinterProfileRepository(db))));
-  const designLibrary = createDesignLibrary(createDesignRepository(db));
+  const burnLog = createBurnLog(createBurnRepository(db), deps.store);
+  const designLibrary = createDesignLibrary(createDesignRepository(db), { keysOf: burnLog.photoKeysOfDesign, forget: burnLog.forget });
   app.use('/api/designs', designRoutes(designLibrary));
+  app.use('/api', burnRoutes(burnLog));
   app.use('/api/shared', sharedDesignRoutes(designLibrary));
   app.use('/api/admin', adminRoutes(createAdminUseCases(deps.auth, createUserDirectory(db))));
   // Anyone else is answered as if there were no mailbox (404), so its existence is not told either.

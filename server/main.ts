@@ -7,6 +7,7 @@ import { loadEnv } from './config/env.ts';
 import { DataDirLockedError, lockDataDir, type DataDirLock } from './db/data-dir-lock.ts';
 import { demoAccounts } from './seed/demo-accounts.ts';
 import { startServer, type RunningServer } from './server.ts';
+import { storageFromUrl } from './storage/object-store.ts';
 
 /**
  * `npm start`: settings first (a bad one stops here, before anything is written), then the
@@ -45,10 +46,11 @@ async function main(): Promise<void> {
     seedDemo: env.SEED_DEMO,
     clientDir,
     trustProxy: env.TRUST_PROXY,
+    storage: env.STORAGE_URL ? storageFromUrl(env.STORAGE_URL, env.S3_ENDPOINT) : { kind: 'disk', dir: join(dataDir, 'files') },
   });
 
   console.log(`\nCanwright is running at ${running.url}`);
-  console.log(`Data: ${env.DATABASE_URL ? 'PostgreSQL server (DATABASE_URL)' : join(dataDir, 'pglite')}`);
+  console.log(`Data: ${env.DATABASE_URL ? 'PostgreSQL server (DATABASE_URL)' : join(dataDir, 'pglite')}; photos: ${env.STORAGE_URL ?? join(dataDir, 'files')}`);
   if (running.mail) console.log(`Mail is kept locally; read it at ${running.url}/dev/mail${env.LOCAL_MAILBOX_FOR_NETWORK ? ' (open to the network: LOCAL_MAILBOX_FOR_NETWORK)' : ' (from this machine only)'}`);
   else if (!env.SMTP_URL) console.log('Mail is not sent: no SMTP_URL, and HOST is not this machine only (set LOCAL_MAILBOX_FOR_NETWORK=true to read it at /dev/mail).');
   if (env.SEED_DEMO) {

@@ -1,4 +1,7 @@
 import { randomBytes } from 'node:crypto';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { Express } from 'express';
@@ -10,6 +13,7 @@ import { limitsFor, type RateLimitPolicy } from './http/rate-limits.ts';
 import { createMailer, createNotSentMailer, type Mailer } from './mail/mailer.ts';
 import { mailboxMode, type MailboxMode } from './mail/mailbox-policy.ts';
 import { createRenderPool, type RenderPool, type RenderPoolOptions } from './render/render-pool.ts';
+import { openObjectStore, type StorageTarget } from './storage/object-store.ts';
 import { seedDemo } from './seed/seed-demo.ts';
 import { version } from './version.ts';
 
@@ -36,6 +40,8 @@ export interface ServerOptions {
   /** Express's `trust proxy`: which proxies may say who the client is (TRUST_PROXY). Off by default. */
   trustProxy?: false | number | string[];
   quiet?: boolean;
+  /** Where uploaded files go; by default a fresh temporary folder, removed on close (tests). */
+  storage?: StorageTarget;
   /** Render threads and queue; by default from the CPU count. */
   renderPool?: RenderPoolOptions;
 }
@@ -89,6 +95,8 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       quiet: options.quiet,
     });
     renderPool = createRenderPool(options.renderPool);
+    const temporaryFiles = options.storage ? undefined : mkdtempSync(join(tmpdir(), 'canwright-files-'));
+    const store = openObjectStore(options.storage ?? { kind: 'disk', dir: temporaryFiles! });
     const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
     const app = createApp({
       database,
@@ -99,6 +107,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       trustProxy: options.trustProxy ?? false,
       rateLimits,
       renderPool,
+      store,
       clientDir: options.clientDir,
     });
     handle = app;
@@ -122,6 +131,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
           await new Promise<void>((resolve) => openServer.close(() => resolve()));
           openMailer.close();
           await openPool.close();
+          if (temporaryFiles) rmSync(temporaryFiles, { recursive: true, force: true });
           await openMail?.close();
           await database.close();
         })();

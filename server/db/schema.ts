@@ -144,6 +144,69 @@ export const designVersions = pgTable(
 );
 
 /**
+ * Test burns. Each is pinned to the design version it tested (version_id), so later edits of the
+ * design never rewrite what was tested. Measures are in SI; every one but the date is optional.
+ */
+export const burns = pgTable(
+  'burns',
+  {
+    id: text('id').primaryKey(),
+    ownerId: text('owner_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    versionId: text('version_id')
+      .notNull()
+      .references(() => designVersions.id, { onDelete: 'cascade' }),
+    burnedAt: timestamp('burned_at', { withTimezone: true }).notNull(),
+    fuelKind: text('fuel_kind'),
+    fuelMassG: doublePrecision('fuel_mass_g'),
+    starter: text('starter'),
+    ambientC: doublePrecision('ambient_c'),
+    wind: text('wind'),
+    windscreen: boolean('windscreen'),
+    windFacing: text('wind_facing'),
+    timeToLightS: doublePrecision('time_to_light_s'),
+    timeToJetsS: doublePrecision('time_to_jets_s'),
+    timeToBoilS: doublePrecision('time_to_boil_s'),
+    boilWaterL: doublePrecision('boil_water_l'),
+    boilStartC: doublePrecision('boil_start_c'),
+    burnTimeS: doublePrecision('burn_time_s'),
+    charG: doublePrecision('char_g'),
+    smoke: text('smoke'),
+    flameRing: integer('flame_ring'),
+    notes: text('notes'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [index('burns_design_id_idx').on(table.designId), index('burns_owner_id_idx').on(table.ownerId)],
+);
+
+/** Photos of a burn: the picture and its thumbnail live in the object store under these keys. */
+export const burnPhotos = pgTable(
+  'burn_photos',
+  {
+    id: text('id').primaryKey(),
+    burnId: text('burn_id')
+      .notNull()
+      .references(() => burns.id, { onDelete: 'cascade' }),
+    ownerId: text('owner_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    imageKey: text('image_key').notNull(),
+    thumbnailKey: text('thumbnail_key').notNull(),
+    contentType: text('content_type').notNull(),
+    width: integer('width').notNull(),
+    height: integer('height').notNull(),
+    bytes: integer('bytes').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [index('burn_photos_burn_id_idx').on(table.burnId)],
+);
+
+/**
  * better-auth's rate-limit counts (its "database" storage), so that every server on one database
  * counts the same sign-in tries. last_request is a time in milliseconds since 1970, as better-auth keeps it.
  */
@@ -161,4 +224,4 @@ export const requestCounts = pgTable('request_counts', {
   resetAt: timestamp('reset_at', { withTimezone: true }).notNull(),
 });
 
-export const schema = { users, sessions, accounts, verifications, rateLimits, printerProfiles, designs, designVersions, requestCounts };
+export const schema = { users, sessions, accounts, verifications, rateLimits, printerProfiles, designs, designVersions, burns, burnPhotos, requestCounts };

@@ -26,8 +26,14 @@ function nameCopy(name: string): string {
   return `${name.slice(0, NAME_MAX - COPY_SUFFIX.length).trimEnd()}${COPY_SUFFIX}`;
 }
 
+/** Files stored for a design outside the database (its burns' photos), deleted with it. */
+export interface DesignFiles {
+  keysOf(ownerId: string, designId: string): Promise<string[]>;
+  forget(keys: string[]): Promise<void>;
+}
+
 /** A signed-in maker's saved designs. Only the share link reads a design without its owner. */
-export function createDesignUseCases(designs: DesignRepository) {
+export function createDesignUseCases(designs: DesignRepository, files?: DesignFiles) {
   /** Runs a change that answers the changed row, then reads the design back with its current version. */
   async function changeThenRead(ownerId: string, change: Promise<DesignRow | undefined>): Promise<DesignDetail> {
     const row = await change;
@@ -71,7 +77,9 @@ export function createDesignUseCases(designs: DesignRepository) {
     },
 
     async deleteDesign(ownerId: string, id: string): Promise<void> {
+      const keys = (await files?.keysOf(ownerId, id)) ?? [];
       if (!(await designs.remove(ownerId, id))) throw missingDesign();
+      await files?.forget(keys);
     },
 
     /** A new design whose version 1 is the source's current version; tags kept, sharing and print date not. */

@@ -50,6 +50,31 @@ export class HttpClient {
     return { status: response.status, headers: response.headers, body: parsed as T };
   }
 
+  /** Sends one file as multipart/form-data, as a browser's file input does. */
+  async upload<T = any>(path: string, field: string, bytes: Uint8Array, fileName: string, type = 'application/octet-stream'): Promise<HttpResponse<T>> {
+    const form = new FormData();
+    form.append(field, new Blob([new Uint8Array(bytes)], { type }), fileName);
+    const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json', ...this.extraHeaders };
+    if (this.cookies.size) headers.Cookie = this.cookieHeader;
+    const response = await fetch(new URL(path, this.baseUrl), { method: 'POST', headers, body: form, redirect: 'manual' });
+    const text = await response.text();
+    let parsed: unknown = text;
+    try {
+      parsed = text ? JSON.parse(text) : undefined;
+    } catch {
+      // not JSON: keep the text
+    }
+    return { status: response.status, headers: response.headers, body: parsed as T };
+  }
+
+  /** The raw bytes of an answer (a photo, a ZIP). */
+  async bytes(path: string): Promise<{ status: number; headers: Headers; bytes: Uint8Array }> {
+    const headers: Record<string, string> = { Origin: this.baseUrl, ...this.extraHeaders };
+    if (this.cookies.size) headers.Cookie = this.cookieHeader;
+    const response = await fetch(new URL(path, this.baseUrl), { headers, redirect: 'manual' });
+    return { status: response.status, headers: response.headers, bytes: new Uint8Array(await response.arrayBuffer()) };
+  }
+
   get<T = any>(path: string) {
     return this.request<T>('GET', path);
   }

@@ -29,6 +29,8 @@ const validBodies: Record<string, () => Record<string, unknown>> = {
   'PATCH /api/printer-profiles/:id': () => ({ name: 'Fuzz', measuredXMm: 150.2 }),
   'PATCH /api/account/preferences': () => ({ units: 'mm', defaultPaper: 'a4', drillSetIds: ['frac:1/4'] }),
   'PATCH /api/admin/users/:id': () => ({ role: 'instructor', disabled: false }),
+  'POST /api/designs/:id/burns': () => ({ date: '2026-11-30T10:00:00Z', fuelKind: 'pellets', fuelMassG: 120, wind: 'light', windscreen: true, timeToJetsS: 140, flameRing: 4, smoke: 'some', notes: 'fuzz', version: 1 }),
+  'PATCH /api/burns/:burnId': () => ({ notes: 'fuzzed', charG: 12, ambientC: 5, date: '2026-12-01T10:00:00+01:00' }),
   'POST /api/render/pdf': () => ({ design: design(), print: { paper: 'letter', orientation: 'portrait', marginMm: 8 }, printer: { measuredXMm: 150, measuredYMm: 200 }, version: '2' }),
   'POST /api/render/svg': () => ({ design: design(), print: { paper: 'a4' } }),
   'POST /api/render/holes.csv': () => ({ design: design() }),
@@ -74,7 +76,7 @@ const bodyFor = (key: string) => {
 let server: TestServer;
 let owner: HttpClient;
 let admin: HttpClient;
-let ids: { designId: string; profileId: string; userId: string };
+let ids: { designId: string; profileId: string; userId: string; burnId: string };
 
 beforeAll(async () => {
   server = await startTestServer({ rateLimits: unlimited });
@@ -83,7 +85,8 @@ beforeAll(async () => {
   const bystander = await createUser(server);
   const created = await owner.post('/api/designs', { document: design() });
   const profile = await owner.post('/api/printer-profiles', { name: 'Laser', measuredXMm: 150, measuredYMm: 200 });
-  ids = { designId: created.body.id, profileId: profile.body.id, userId: bystander.id };
+  const burn = await owner.post(`/api/designs/${created.body.id}/burns`, { date: '2026-11-30T10:00:00Z' });
+  ids = { designId: created.body.id, profileId: profile.body.id, userId: bystander.id, burnId: burn.body.id };
 });
 afterAll(() => server.close());
 
@@ -108,6 +111,7 @@ describe('fuzzed bodies on every JSON route', () => {
         .replace(/^\/api\/designs\/:id/, `/api/designs/${ids.designId}`)
         .replace(/^\/api\/printer-profiles\/:id/, `/api/printer-profiles/${ids.profileId}`)
         .replace(/^\/api\/admin\/users\/:id/, `/api/admin/users/${ids.userId}`)
+        .replace(':burnId', ids.burnId)
         .replace(':number', '1');
       const http = route.path.startsWith('/api/admin') ? admin : owner;
       await fc.assert(

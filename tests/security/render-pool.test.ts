@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { developmentLimits } from '../../server/http/rate-limits.ts';
 import { createRenderPool } from '../../server/render/render-pool.ts';
 import type * as SvgWriter from '../../server/render/svg/svg-writer.ts';
 import { wallOfHoles } from '../../src/features/preview/demo-designs.ts';
@@ -66,7 +67,8 @@ describe('a request for a sheet the kit does not have', () => {
 describe('renders over HTTP do not hold up the server', () => {
   let server: TestServer;
   beforeAll(async () => {
-    server = await startTestServer({ renderPool: { threads: 1, maxQueue: 3 } });
+    // Renders are rate-limited per address too (their own test: rate-limits); here the pool alone is tried.
+    server = await startTestServer({ renderPool: { threads: 1, maxQueue: 3 }, rateLimits: { ...developmentLimits, rendersPerAddress: 1_000_000 } });
   });
   afterAll(() => server.close());
 

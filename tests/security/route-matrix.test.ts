@@ -1,9 +1,10 @@
 import { eq } from 'drizzle-orm';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { users } from '../../server/db/schema.ts';
 import pintCanStove from '../../templates/pint-can-stove.json' with { type: 'json' };
 import { createUser, signedInClient } from '../helpers/factories.ts';
-import { HttpClient } from '../helpers/http-client.ts';
+import { HttpClient, type HttpResponse } from '../helpers/http-client.ts';
 import { routeTable, type RouteEntry } from '../helpers/route-table.ts';
 import { recordCount } from '../helpers/security-counts.ts';
 import { startTestServer, type TestServer } from '../helpers/test-server.ts';
@@ -36,7 +37,17 @@ const bodies: Record<string, () => unknown> = {
   'PATCH /api/printer-profiles/:id': () => ({ name: 'Taken over' }),
   'PATCH /api/account/preferences': () => ({ units: 'mm' }),
   'PATCH /api/admin/users/:id': () => ({ role: 'admin', disabled: true }),
+  'POST /api/designs/:id/burns': () => ({ date: '2026-11-30T10:00:00Z', notes: 'taken over' }),
+  'PATCH /api/burns/:burnId': () => ({ notes: 'taken over' }),
 };
+
+/** Routes that take a file rather than JSON: the request an owner's browser would send. */
+let photo: Buffer;
+const uploads: Record<string, (http: HttpClient, path: string) => Promise<HttpResponse>> = {
+  'POST /api/burns/:burnId/photos': (http, path) => http.upload(path, 'photo', photo, 'stove.jpg', 'image/jpeg'),
+};
+const send = (http: HttpClient, route: RouteEntry, path: string) =>
+  uploads[keyOf(route)]?.(http, path) ?? http.request(route.method, path, route.method === 'GET' || route.method === 'DELETE' ? undefined : (bodies[keyOf(route)]?.() ?? {}));
 
 type Actor = 'second maker' | 'instructor' | 'admin' | 'anonymous';
 
@@ -46,9 +57,11 @@ let ownerId: string;
 let ownerEmail: string;
 let actors: Record<Actor, HttpClient>;
 /** The owner's resources the attempts aim at. */
-let target: { designId: string; profileId: string; shareToken: string };
+let target: Resources;
+type Resources = { designId: string; profileId: string; shareToken: string; burnId: string; photoId: string };
 
 beforeAll(async () => {
+  photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#8b4513' } }).jpeg().toBuffer();
   server = await startTestServer();
   const first = await createUser(server, { name: 'Owner Tamsin' });
   ownerId = first.id;
@@ -64,28 +77,38 @@ beforeAll(async () => {
 });
 afterAll(() => server.close());
 
-async function createResources(http: HttpClient) {
+/** The owner's design (two versions, shared), a burn with a photo and, unless one is given, a printer profile. */
+async function createResources(http: HttpClient, profileId?: string): Promise<Resources> {
   const design = await http.post('/api/designs', { document: { ...document(), name: "Tamsin's secret stove" }, tags: ['secret'] });
   expect(design.status).toBe(201);
   await http.post(`/api/designs/${design.body.id}/versions`, { document: document(), note: 'second' });
   const shared = await http.post(`/api/designs/${design.body.id}/share`, {});
-  const profile = await http.post('/api/printer-profiles', { name: "Tamsin's laser", measuredXMm: 149.5, measuredYMm: 200.4 });
+  const profile = profileId ? { status: 201, body: { id: profileId } } : await http.post('/api/printer-profiles', { name: "Tamsin's laser", measuredXMm: 149.5, measuredYMm: 200.4 });
   expect(profile.status).toBe(201);
-  return { designId: design.body.id as string, profileId: profile.body.id as string, shareToken: shared.body.shareToken as string };
+  const burn = await http.post(`/api/designs/${design.body.id}/burns`, { date: '2026-11-30T10:00:00Z', notes: "Tamsin's secret burn" });
+  expect(burn.status).toBe(201);
+  const picture = await http.upload(`/api/burns/${burn.body.id}/photos`, 'photo', photo, 'stove.jpg', 'image/jpeg');
+  expect(picture.status).toBe(201);
+  return { designId: design.body.id, profileId: profile.body.id, shareToken: shared.body.shareToken, burnId: burn.body.id, photoId: picture.body.id };
 }
 
 /** Everything of the owner's that could change: the library, every version, profiles, account and the user row. */
 async function ownerSnapshot() {
   const designs = (await owner.get('/api/designs')).body;
-  const versions = await Promise.all(designs.designs.map(async (d: { id: string }) => [(await owner.get(`/api/designs/${d.id}`)).body, (await owner.get(`/api/designs/${d.id}/versions`)).body]));
+  const versions = await Promise.all(
+    designs.designs.map(async (d: { id: string }) => [(await owner.get(`/api/designs/${d.id}`)).body, (await owner.get(`/api/designs/${d.id}/versions`)).body, (await owner.get(`/api/designs/${d.id}/burns`)).body]),
+  );
+  const photoBytes = (await owner.bytes(`/api/photos/${target.photoId}`)).bytes.length;
   const [row] = await server.database.db.select().from(users).where(eq(users.id, ownerId));
-  return { designs, versions, profiles: (await owner.get('/api/printer-profiles')).body, account: (await owner.get('/api/account')).body, row };
+  return { designs, versions, photoBytes, profiles: (await owner.get('/api/printer-profiles')).body, account: (await owner.get('/api/account')).body, row };
 }
 
 const keyOf = (route: RouteEntry) => `${route.method} ${route.path}`;
 const isAdminRoute = (route: RouteEntry) => route.path.startsWith('/api/admin');
-const fill = (path: string, resources: typeof target, userId: string) =>
+const fill = (path: string, resources: Resources, userId: string) =>
   path
+    .replace(':burnId', resources.burnId)
+    .replace(':photoId', resources.photoId)
     .replace(/^\/api\/designs\/:id/, `/api/designs/${resources.designId}`)
     .replace(/^\/api\/printer-profiles\/:id/, `/api/printer-profiles/${resources.profileId}`)
     .replace(/^\/api\/admin\/users\/:id/, `/api/admin/users/${userId}`)
@@ -105,14 +128,14 @@ describe('the route table', () => {
 describe("every route, for everyone but the owner, against the owner's resources", () => {
   it('is refused (or shows nothing of the owner\'s), never a 5xx, and leaves the owner\'s data unchanged', async ({ task }) => {
     const before = await ownerSnapshot();
-    const secrets = [target.designId, target.profileId, target.shareToken, ownerEmail, "Tamsin's secret stove", "Tamsin's laser"];
+    const secrets = [target.designId, target.profileId, target.shareToken, target.burnId, target.photoId, ownerEmail, "Tamsin's secret stove", "Tamsin's laser", "Tamsin's secret burn"];
     const routes = routeTable(server.app).filter((route) => !route.path.startsWith('/api/auth/') && !publicRoutes[keyOf(route)]);
     let attempts = 0;
     for (const route of routes) {
       for (const [actor, http] of Object.entries(actors) as [Actor, HttpClient][]) {
         // Admin routes are meant for admins (their own tests: roles); everyone else is tried.
         if (actor === 'admin' && isAdminRoute(route)) continue;
-        const response = await http.request(route.method, fill(route.path, target, ownerId), route.method === 'GET' || route.method === 'DELETE' ? undefined : (bodies[keyOf(route)]?.() ?? {}));
+        const response = await send(http, route, fill(route.path, target, ownerId));
         attempts++;
         const label = `${actor}: ${keyOf(route)} -> ${response.status} ${JSON.stringify(response.body ?? null).slice(0, 200)}`;
         expect(response.status, label).toBeLessThan(500);
@@ -154,8 +177,9 @@ describe("every route, for everyone but the owner, against the owner's resources
     const routes = routeTable(server.app).filter((route) => route.path.includes(':') && !route.path.startsWith('/api/auth/') && !publicRoutes[keyOf(route)] && !isAdminRoute(route));
     for (const route of routes) {
       // Fresh resources each time: some of these requests delete what they aim at.
-      const own = await createResources(owner);
-      const response = await owner.request(route.method, fill(route.path, own, ownerId), route.method === 'GET' || route.method === 'DELETE' ? undefined : (bodies[keyOf(route)]?.() ?? {}));
+      // (A profile of its own only for the profile routes: an account holds a limited number.)
+      const own = await createResources(owner, route.path.startsWith('/api/printer-profiles') ? undefined : target.profileId);
+      const response = await send(owner, route, fill(route.path, own, ownerId));
       expect(response.status, `owner: ${keyOf(route)} -> ${response.status} ${JSON.stringify(response.body ?? null).slice(0, 200)}`).toBeLessThan(300);
     }
   });
