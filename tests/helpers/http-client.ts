@@ -27,10 +27,33 @@ export class HttpClient {
   }
 
   async request<T = any>(method: string, path: string, body?: unknown): Promise<HttpResponse<T>> {
-    const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json', ...this.extraHeaders };
-    if (body !== undefined) headers['Content-Type'] = 'application/json';
+    const headers = this.headers({ Accept: 'application/json', ...(body !== undefined ? { 'Content-Type': 'application/json' } : {}) });
+    return this.readJson<T>(await this.send(path, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) }));
+  }
+
+  /** Sends one file as multipart/form-data, as a browser's file input does. */
+  async upload<T = any>(path: string, field: string, bytes: Uint8Array, fileName: string, type = 'application/octet-stream'): Promise<HttpResponse<T>> {
+    const form = new FormData();
+    form.append(field, new Blob([new Uint8Array(bytes)], { type }), fileName);
+    return this.readJson<T>(await this.send(path, { method: 'POST', headers: this.headers({ Accept: 'application/json' }), body: form }));
+  }
+
+  /** The raw bytes of an answer (a photo, a ZIP). */
+  async bytes(path: string): Promise<{ status: number; headers: Headers; bytes: Uint8Array }> {
+    const response = await this.send(path, { headers: this.headers() });
+    return { status: response.status, headers: response.headers, bytes: new Uint8Array(await response.arrayBuffer()) };
+  }
+
+  /** Origin (better-auth and the app check it on changes), the extra headers, and the cookies kept. */
+  private headers(more: Record<string, string> = {}): Record<string, string> {
+    const headers: Record<string, string> = { Origin: this.baseUrl, ...more, ...this.extraHeaders };
     if (this.cookies.size) headers.Cookie = this.cookieHeader;
-    const response = await fetch(new URL(path, this.baseUrl), { method, headers, body: body === undefined ? undefined : JSON.stringify(body), redirect: 'manual' });
+    return headers;
+  }
+
+  /** Sends without following redirects, and keeps the cookies the answer sets or expires. */
+  private async send(path: string, init: RequestInit): Promise<Response> {
+    const response = await fetch(new URL(path, this.baseUrl), { ...init, redirect: 'manual' });
     for (const cookie of response.headers.getSetCookie()) {
       const [pair = '', ...attributes] = cookie.split(';');
       const index = pair.indexOf('=');
@@ -40,6 +63,11 @@ export class HttpClient {
       if (expired) this.cookies.delete(name);
       else this.cookies.set(name, value);
     }
+    return response;
+  }
+
+  /** The answer's JSON, or its text when it is not JSON. */
+  private async readJson<T>(response: Response): Promise<HttpResponse<T>> {
     const text = await response.text();
     let parsed: unknown = text;
     try {
@@ -48,31 +76,6 @@ export class HttpClient {
       // not JSON: keep the text
     }
     return { status: response.status, headers: response.headers, body: parsed as T };
-  }
-
-  /** Sends one file as multipart/form-data, as a browser's file input does. */
-  async upload<T = any>(path: string, field: string, bytes: Uint8Array, fileName: string, type = 'application/octet-stream'): Promise<HttpResponse<T>> {
-    const form = new FormData();
-    form.append(field, new Blob([new Uint8Array(bytes)], { type }), fileName);
-    const headers: Record<string, string> = { Origin: this.baseUrl, Accept: 'application/json', ...this.extraHeaders };
-    if (this.cookies.size) headers.Cookie = this.cookieHeader;
-    const response = await fetch(new URL(path, this.baseUrl), { method: 'POST', headers, body: form, redirect: 'manual' });
-    const text = await response.text();
-    let parsed: unknown = text;
-    try {
-      parsed = text ? JSON.parse(text) : undefined;
-    } catch {
-      // not JSON: keep the text
-    }
-    return { status: response.status, headers: response.headers, body: parsed as T };
-  }
-
-  /** The raw bytes of an answer (a photo, a ZIP). */
-  async bytes(path: string): Promise<{ status: number; headers: Headers; bytes: Uint8Array }> {
-    const headers: Record<string, string> = { Origin: this.baseUrl, ...this.extraHeaders };
-    if (this.cookies.size) headers.Cookie = this.cookieHeader;
-    const response = await fetch(new URL(path, this.baseUrl), { headers, redirect: 'manual' });
-    return { status: response.status, headers: response.headers, bytes: new Uint8Array(await response.arrayBuffer()) };
   }
 
   get<T = any>(path: string) {
