@@ -1,5 +1,6 @@
 import { accountSchema, type Account } from '../../shared/account/account.ts';
-import { paperPreferenceSchema, unitSystemSchema, type Preferences } from '../../shared/account/preferences.ts';
+import { massUnitSchema, paperPreferenceSchema, temperatureUnitSchema, unitSystemSchema, volumeUnitSchema, type Preferences } from '../../shared/account/preferences.ts';
+import { defaultBurnUnits } from '../../shared/units/burn-units.ts';
 import { findDrill } from '../../shared/drills/index.ts';
 import { AppError } from '../http/app-error.ts';
 import { roleSchema } from '../../shared/account/roles.ts';
@@ -13,7 +14,14 @@ export function createAccountUseCases(accounts: AccountRepository) {
   async function getAccount(userId: string): Promise<Account> {
     const row = await accounts.findById(userId);
     if (!row) throw notFound('Your account');
-    return storedAccountSchema.parse(row);
+    const units = unitSystemSchema.catch('in').parse(row.units);
+    const fallback = defaultBurnUnits(units);
+    return storedAccountSchema.parse({
+      ...row,
+      massUnit: massUnitSchema.catch(fallback.mass).parse(row.massUnit ?? fallback.mass),
+      temperatureUnit: temperatureUnitSchema.catch(fallback.temperature).parse(row.temperatureUnit ?? fallback.temperature),
+      volumeUnit: volumeUnitSchema.catch(fallback.volume).parse(row.volumeUnit ?? fallback.volume),
+    });
   }
 
   return {

@@ -24,6 +24,10 @@ export const users = pgTable('users', {
   defaultPaper: text('default_paper').notNull().default('letter'),
   /** The maker's own drills (drill ids); empty means "the usual drills of my units". */
   drillSetIds: text('drill_set_ids').array().notNull().default(sql`'{}'::text[]`),
+  /** Burn log units (g/oz, C/F, L/qt); null follows the length units. */
+  massUnit: text('mass_unit'),
+  temperatureUnit: text('temperature_unit'),
+  volumeUnit: text('volume_unit'),
 });
 
 export const sessions = pgTable(

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { paperPreferenceSchema, unitSystemSchema } from './preferences.ts';
+import { massUnitSchema, paperPreferenceSchema, temperatureUnitSchema, unitSystemSchema, volumeUnitSchema } from './preferences.ts';
 import { roleSchema } from './roles.ts';
 
 /** The signed-in user as the API returns it (GET /api/account). */
@@ -12,11 +12,15 @@ export const accountSchema = z.object({
   units: unitSystemSchema,
   defaultPaper: paperPreferenceSchema,
   drillSetIds: z.array(z.string()),
+  /** Burn log units: the maker's choice, or the ones that go with their length units. */
+  massUnit: massUnitSchema,
+  temperatureUnit: temperatureUnitSchema,
+  volumeUnit: volumeUnitSchema,
 });
 export type Account = z.infer<typeof accountSchema>;
 
 /** A row of the admin users table (GET /api/admin/users). */
-export const adminUserSchema = accountSchema.omit({ units: true, defaultPaper: true, drillSetIds: true }).extend({
+export const adminUserSchema = accountSchema.omit({ units: true, defaultPaper: true, drillSetIds: true, massUnit: true, temperatureUnit: true, volumeUnit: true }).extend({
   disabled: z.boolean(),
   createdAt: z.string(),
 });

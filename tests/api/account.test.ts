@@ -27,6 +27,24 @@ describe('/api/account', () => {
     expect((await http.get('/api/account')).body.units).toBe('mm');
   });
 
+  it('keeps the burn log units, which follow the length units until chosen', async () => {
+    const user = await createUser(server);
+    const http = await signedInClient(server, user);
+    expect((await http.get('/api/account')).body).toMatchObject({ massUnit: 'oz', temperatureUnit: 'F', volumeUnit: 'qt' });
+    await http.patch('/api/account/preferences', { units: 'mm' });
+    expect((await http.get('/api/account')).body).toMatchObject({ massUnit: 'g', temperatureUnit: 'C', volumeUnit: 'L' });
+
+    const chosen = await http.patch('/api/account/preferences', { massUnit: 'oz', volumeUnit: 'L' });
+    expect(chosen.status).toBe(200);
+    expect(chosen.body).toMatchObject({ units: 'mm', massUnit: 'oz', temperatureUnit: 'C', volumeUnit: 'L' });
+    await http.patch('/api/account/preferences', { units: 'in' });
+    expect((await http.get('/api/account')).body).toMatchObject({ massUnit: 'oz', temperatureUnit: 'F', volumeUnit: 'L' });
+
+    const bad = await http.patch('/api/account/preferences', { temperatureUnit: 'K' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).not.toMatch(/invalid_enum|Invalid option/);
+  });
+
   it('keeps the default paper and the maker\'s own drill set', async () => {
     const user = await createUser(server);
     const http = await signedInClient(server, user);
