@@ -16,6 +16,8 @@ export const designSummarySchema = z.object({
   parts: z.array(z.object({ id: z.string(), role: partRoleSchema, vesselName: z.string(), canCode: z.string().nullable() })),
   /** Primary : secondary open area, or null without jets. */
   ratio: z.number().nullable(),
+  /** Centre-to-centre spacing of the burn chamber's jets round the wall; absent in summaries saved before it was kept. */
+  jetPitchMm: z.number().nullable().optional(),
 });
 export type DesignSummary = z.infer<typeof designSummarySchema>;
 

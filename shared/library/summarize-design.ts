@@ -12,7 +12,19 @@ export function summarizeDesign(design: Design): DesignSummary {
     parts: design.parts.map((part) => ({ id: part.id, role: part.role, vesselName: part.vessel.name, canCode: findCanCode(part.vessel.outerDiameterMm, part.vessel.heightMm) })),
     // Three decimals are far finer than the one the version list shows.
     ratio: layout.airflow.ratio === null ? null : Math.round(layout.airflow.ratio * 1000) / 1000,
+    jetPitchMm: jetPitchMm(design),
   };
+}
+
+/**
+ * The nominal pitch of the chamber's first jet row: its circumference over its positions
+ * (an arc, the length the wrap strip measures).
+ */
+function jetPitchMm(design: Design): number | null {
+  const chamber = design.parts.find((part) => part.role === 'burn-chamber');
+  const row = chamber?.sideRows.find((r) => r.group === 'secondary');
+  if (!chamber || !row) return null;
+  return Math.round(((Math.PI * chamber.vessel.outerDiameterMm) / row.count) * 100) / 100;
 }
 
 /** A can under half a sixteenth of an inch has no code (formatCanCode refuses it). */
