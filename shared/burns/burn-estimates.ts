@@ -53,7 +53,8 @@ const median = (values: number[]): number | null => {
   if (values.length === 0) return null;
   const sorted = [...values].sort((a, b) => a - b);
   const mid = Math.floor(sorted.length / 2);
-  return sorted.length % 2 === 1 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+  const at = (i: number) => sorted[i] as number;
+  return sorted.length % 2 === 1 ? at(mid) : (at(mid - 1) + at(mid)) / 2;
 };
 
 /** The design's own burn rate from its log (the median, so one windy day does not swing it). */
