@@ -97,7 +97,7 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
     renderPool = createRenderPool(options.renderPool);
     const temporaryFiles = options.storage ? undefined : mkdtempSync(join(tmpdir(), 'canwright-files-'));
     const store = openObjectStore(options.storage ?? { kind: 'disk', dir: temporaryFiles! });
-    const seeded = options.seedDemo ? (await seedDemo(database.db, auth)).created : [];
+    const seeded = options.seedDemo ? (await seedDemo(database.db, auth, store)).created : [];
     const app = createApp({
       database,
       auth,

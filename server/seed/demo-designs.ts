@@ -22,7 +22,7 @@ function withRowCount(design: Design, rowId: string, count: number): Design {
  * first version of 14 jets, shared and printed), the big No. 10 stove, the metric tin and the
  * stove with a concentrator. Written only when the demo account is first made.
  */
-export async function seedDemoLibrary(library: DesignLibrary, ownerId: string): Promise<number> {
+export async function seedDemoLibrary(library: DesignLibrary, ownerId: string): Promise<{ designs: number; classStoveId: string }> {
   const pint = loadExample('pint-can-stove.json');
   const classStove = await library.createDesign(ownerId, { tags: ['class kit', 'pint'], document: withRowCount(pint, 'jets', 14) });
   await library.saveVersion(ownerId, classStove.id, { document: pint, note: 'Two more jets after the first test burn smoked' });
@@ -32,5 +32,5 @@ export async function seedDemoLibrary(library: DesignLibrary, ownerId: string): 
   await library.createDesign(ownerId, { tags: ['big pot'], document: loadExample('no10-can-stove.json') });
   await library.createDesign(ownerId, { tags: ['metric'], document: loadExample('metric-tin-stove.json') });
   await library.createDesign(ownerId, { tags: ['concentrator'], document: loadExample('seam-keepout-concentrator.json') });
-  return 4;
+  return { designs: 4, classStoveId: classStove.id };
 }

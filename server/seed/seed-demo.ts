@@ -1,19 +1,23 @@
 import { eq } from 'drizzle-orm';
 import type { Auth } from '../auth/auth.ts';
 import type { Db } from '../db/database.ts';
+import { createBurnLog } from '../burns/burn-log.ts';
+import { createBurnRepository } from '../burns/burn-repository.ts';
 import { users } from '../db/schema.ts';
 import { createDesignLibrary } from '../library/design-library.ts';
 import { createDesignRepository } from '../library/design-repository.ts';
 import { demoAccounts, type DemoAccount } from './demo-accounts.ts';
+import type { ObjectStore } from '../storage/object-store.ts';
+import { seedDemoBurns } from './demo-burns.ts';
 import { seedDemoLibrary } from './demo-designs.ts';
 
 /**
  * Creates the demo accounts that are missing, verified and with their roles, and fills the demo
- * maker's library. Idempotent: an account that exists is left alone (its password may have been
+ * maker's library and the class stove's burn log (photos go to `store`). Idempotent: an account that exists is left alone (its password may have been
  * changed, its designs deleted, on purpose).
  * Uses better-auth's server-side admin API (no request, so no session is needed).
  */
-export async function seedDemo(db: Db, auth: Auth, accounts: DemoAccount[] = demoAccounts): Promise<{ created: string[] }> {
+export async function seedDemo(db: Db, auth: Auth, store: ObjectStore, accounts: DemoAccount[] = demoAccounts): Promise<{ created: string[] }> {
   const created: string[] = [];
   for (const account of accounts) {
     const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email));
@@ -21,7 +25,10 @@ export async function seedDemo(db: Db, auth: Auth, accounts: DemoAccount[] = dem
     const { user } = await auth.api.createUser({
       body: { name: account.name, email: account.email, password: account.password, role: account.role, data: { emailVerified: true } },
     });
-    if (account.withDemoLibrary) await seedDemoLibrary(createDesignLibrary(createDesignRepository(db)), user.id);
+    if (account.withDemoLibrary) {
+      const { classStoveId } = await seedDemoLibrary(createDesignLibrary(createDesignRepository(db)), user.id);
+      await seedDemoBurns(createBurnLog(createBurnRepository(db), store), user.id, classStoveId);
+    }
     created.push(account.email);
   }
   return { created };

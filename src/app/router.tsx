@@ -59,6 +59,39 @@ export const router = createBrowserRouter([
             ),
           })),
       },
+      {
+        path: 'library/:id/timer',
+        lazy: () =>
+          import('../features/burns/components/burn-timer-page.tsx').then(({ BurnTimerPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <BurnTimerPage />
+              </RequireAccount>
+            ),
+          })),
+      },
+      {
+        path: 'library/:id/burns/new',
+        lazy: () =>
+          import('../features/burns/components/burn-entry-page.tsx').then(({ NewBurnPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <NewBurnPage />
+              </RequireAccount>
+            ),
+          })),
+      },
+      {
+        path: 'library/:id/burns/:burnId',
+        lazy: () =>
+          import('../features/burns/components/burn-entry-page.tsx').then(({ BurnEntryPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <BurnEntryPage />
+              </RequireAccount>
+            ),
+          })),
+      },
       { path: 'shared/:token', lazy: () => import('../features/shared-design/components/shared-design-page.tsx').then((m) => ({ Component: m.SharedDesignPage })) },
       { path: 'design/print', lazy: () => import('../features/print/components/print-page.tsx').then((m) => ({ Component: m.PrintPage })) },
       { path: 'design', lazy: () => import('../features/designer/components/designer-page.tsx').then((m) => ({ Component: m.DesignerPage })) },

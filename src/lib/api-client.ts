@@ -33,6 +33,11 @@ export async function apiRequest<S extends z.ZodType>(path: string, schema: S, o
     credentials: 'same-origin',
     signal: options.signal,
   });
+  return readAnswer(response, path, schema);
+}
+
+/** Turns an answer into the schema's value, or an ApiError in the person's words. */
+async function readAnswer<S extends z.ZodType>(response: Response, path: string, schema: S): Promise<z.output<S>> {
   const payload: unknown = await response.json().catch(() => undefined);
   if (!response.ok) {
     const error = (payload as { error?: { code?: string; message?: string; details?: { fields?: FieldProblem[] } } } | undefined)?.error;
@@ -61,4 +66,12 @@ export async function fetchRetryingWhenBusy(
     if (!busy || attempt >= tries || init.signal?.aborted) return response;
     await sleep(wait * 1000);
   }
+}
+
+/** Sends one file as multipart form data (the browser sets the boundary) and checks the answer. */
+export async function apiUpload<S extends z.ZodType>(path: string, schema: S, field: string, file: Blob, fileName: string): Promise<z.output<S>> {
+  const form = new FormData();
+  form.append(field, file, fileName);
+  const response = await fetch(path, { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
+  return readAnswer(response, path, schema);
 }

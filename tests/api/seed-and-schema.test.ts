@@ -38,8 +38,23 @@ describe('demo seed', () => {
     expect((await instructor.get('/api/designs')).body.designs).toEqual([]);
   });
 
+  it('logs the class stove\'s test burns on both versions, with drawn photos', async () => {
+    const maker = await signedInClient(server, demoAccounts.find((a) => a.withDemoLibrary)!);
+    const pint = (await maker.get('/api/designs?sort=name')).body.designs.find((d: { name: string }) => d.name === 'Alder Street pint-can stove');
+    const { burns } = (await maker.get(`/api/designs/${pint.id}/burns`)).body;
+    expect(burns.map((b: { version: number }) => b.version).sort()).toEqual([1, 1, 2, 2, 2]);
+    const photos = burns.flatMap((b: { photos: { url: string; thumbnailUrl: string }[] }) => b.photos);
+    expect(photos).toHaveLength(3);
+    const picture = await maker.bytes(photos[0].url);
+    expect(picture.status).toBe(200);
+    // JPEG files start with the SOI marker FF D8 FF (ITU-T T.81, annex B).
+    expect([...picture.bytes.subarray(0, 3)]).toEqual([0xff, 0xd8, 0xff]);
+  });
+
   it('is idempotent', async () => {
-    expect((await seedDemo(server.database.db, server.auth)).created).toEqual([]);
+    // Nothing is written a second time, so nothing reaches the store.
+    const untouchable = { kind: 'disk' as const, put: () => Promise.reject(new Error('written')), get: () => Promise.reject(new Error('read')), delete: () => Promise.reject(new Error('deleted')) };
+    expect((await seedDemo(server.database.db, server.auth, untouchable)).created).toEqual([]);
   });
 });
 

@@ -6,6 +6,7 @@ import { Notice } from '../../../components/notice.tsx';
 import { Page } from '../../../components/page.tsx';
 import { ApiError } from '../../../lib/api-client.ts';
 import { useAccount } from '../../account/api/get-account.ts';
+import { BurnLogSection } from '../../burns/components/burn-log-section.tsx';
 import { openDesign } from '../../designer/open-design.ts';
 import { useDesign } from '../api/get-design.ts';
 import { useVersions } from '../api/get-versions.ts';
@@ -21,7 +22,7 @@ const backLink = (
   </Link>
 );
 
-/** One saved design: its tags, share link and versions, any of which can be restored. */
+/** One saved design: its burn log, tags, share link and versions, any of which can be restored. */
 export function DesignHistoryPage() {
   const id = useParams().id ?? '';
   const navigate = useNavigate();
@@ -70,6 +71,9 @@ export function DesignHistoryPage() {
         </p>
       }
     >
+      <div className="mb-10">
+        <BurnLogSection designId={detail.id} document={detail.document} versions={versions.data?.versions ?? []} lengthUnits={account?.units ?? detail.document.units} />
+      </div>
       <div className="grid gap-8 lg:grid-cols-[minmax(0,1.4fr)_minmax(0,1fr)]">
         <section aria-labelledby="versions-heading" className="order-2 flex flex-col gap-3 lg:order-1">
           <div className="flex flex-wrap items-center justify-between gap-2">
