@@ -27,7 +27,7 @@ export function AccountPage() {
             <dd>{roleLabels[account.role]}</dd>
           </dl>
         </section>
-        <UnitsPreference current={account.units} />
+        <UnitsPreference current={account.units} account={account} />
         <PrintPreferences account={account} />
         <section aria-labelledby="printer-heading" className="rounded-lg border border-rule bg-white p-5">
           <h2 id="printer-heading" className="text-lg font-semibold">

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import type { Account } from '../../../../shared/account/account.ts';
 import type { UnitSystem } from '../../../../shared/account/preferences.ts';
 import { Notice } from '../../../components/notice.tsx';
 import { useUpdatePreferences } from '../api/update-preferences.ts';
@@ -8,7 +9,7 @@ const choices: { value: UnitSystem; label: string; example: string }[] = [
   { value: 'mm', label: 'Millimetres', example: 'such as 4.8 mm, metric drills' },
 ];
 
-export function UnitsPreference({ current }: { current: UnitSystem }) {
+export function UnitsPreference({ current, account }: { current: UnitSystem; account?: Account }) {
   const update = useUpdatePreferences();
   // The choice shows at once; it falls back to the saved value if saving fails.
   const [selected, setSelected] = useState(current);
@@ -40,10 +41,45 @@ export function UnitsPreference({ current }: { current: UnitSystem }) {
           </label>
         ))}
       </fieldset>
+      {account && <BurnUnitsChoice account={account} />}
       <div className="mt-2" aria-live="polite">
         {update.isSuccess && <p className="text-sm text-ok">Saved.</p>}
         {update.isError && <Notice tone="error">{update.error.message}</Notice>}
       </div>
     </section>
+  );
+}
+
+type BurnUnitKey = 'massUnit' | 'temperatureUnit' | 'volumeUnit';
+const burnUnitChoices: { key: BurnUnitKey; label: string; options: [string, string][] }[] = [
+  { key: 'massUnit', label: 'Fuel and char', options: [['g', 'grams'], ['oz', 'ounces']] },
+  { key: 'temperatureUnit', label: 'Temperatures', options: [['C', '°C'], ['F', '°F']] },
+  { key: 'volumeUnit', label: 'Water', options: [['L', 'litres'], ['qt', 'US quarts']] },
+];
+
+/** The burn log's units; stored values stay in grams, degrees Celsius and litres whatever is chosen. */
+function BurnUnitsChoice({ account }: { account: Account }) {
+  const update = useUpdatePreferences();
+  return (
+    <fieldset className="mt-4 grid gap-3 sm:grid-cols-3">
+      <legend className="mb-1 text-sm text-ink-soft">The burn log shows measurements in</legend>
+      {burnUnitChoices.map((choice) => (
+        <label key={choice.key} className="flex flex-col gap-1 text-sm font-medium">
+          {choice.label}
+          <select
+            value={account[choice.key]}
+            onChange={(e) => update.mutate({ [choice.key]: e.target.value })}
+            className="min-h-10 rounded-md border border-rule bg-white px-2 py-1 text-base font-normal"
+          >
+            {choice.options.map(([value, words]) => (
+              <option key={value} value={value}>
+                {words}
+              </option>
+            ))}
+          </select>
+        </label>
+      ))}
+      {update.isError && <Notice tone="error">{update.error.message}</Notice>}
+    </fieldset>
   );
 }
