@@ -139,11 +139,17 @@ export function BurnEntryPage() {
 
   return (
     <Page title={`Burn of ${new Date(entry.date).toLocaleDateString()}`} width="wide" intro={<p>Version {entry.version} · {back}</p>}>
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1.5fr)_minmax(0,1fr)]">
-        <div className="flex flex-col gap-4">
-          {search.get('saved') && !update.isSuccess && <Notice tone="success">Saved. Add photos of the burn if you have them.</Notice>}
-          {update.isSuccess && <Notice tone="success">Changes saved.</Notice>}
-          {update.isError && <Notice tone="error">{update.error.message}</Notice>}
+      <div className="mb-4 flex flex-col gap-2" aria-live="polite">
+        {search.get('saved') && !update.isSuccess && <Notice tone="success">Saved. Add photos of the burn if you have them.</Notice>}
+        {update.isSuccess && <Notice tone="success">Changes saved.</Notice>}
+        {update.isError && <Notice tone="error">{update.error.message}</Notice>}
+      </div>
+      {/* On a phone the photos come first (the next thing after saving); on a wide screen they sit beside the form. */}
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1.5fr)_minmax(0,1fr)] lg:items-start">
+        <div className="lg:col-start-2 lg:row-start-1">
+          <BurnPhotos burn={entry} />
+        </div>
+        <div className="lg:col-start-1 lg:row-span-2 lg:row-start-1">
           <BurnEntryForm
             key={entry.updatedAt}
             initial={formValuesOf(entry, units)}
@@ -154,8 +160,7 @@ export function BurnEntryPage() {
             onSubmit={({ date, fields }) => update.mutate({ burnId, change: { date, ...fields } })}
           />
         </div>
-        <div className="flex flex-col gap-4">
-          <BurnPhotos burn={entry} />
+        <div className="flex flex-col gap-4 lg:col-start-2 lg:row-start-2">
           <section className="flex flex-col gap-2 rounded-lg border border-rule bg-white p-4">
             <h2 className="font-semibold">Delete this entry</h2>
             {confirming ? (
