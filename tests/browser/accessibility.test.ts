@@ -59,13 +59,14 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     expect(await seriousViolations(page)).toEqual([]);
   });
 
-  it('library, history and shared pages', async () => {
+  it('library, history (with its burn log), burn and shared pages', async () => {
     const maker = await createUser(server);
     const api = await signedInClient(server, maker);
     const document = JSON.parse(readFileSync(new URL('../../templates/pint-can-stove.json', import.meta.url), 'utf8'));
     const created = await api.post('/api/designs', { document });
     const shared = await api.post(`/api/designs/${created.body.id}/share`, {});
     sharedPath = shared.body.shareUrlPath;
+    const burn = await api.post(`/api/designs/${created.body.id}/burns`, { date: '2026-11-30T10:00:00Z', timeToJetsS: 120, timeToBoilS: 540, boilWaterL: 0.5, burnTimeS: 1300, fuelMassG: 160, flameRing: 4 });
     await page.goto(`${server.url}/sign-in`);
     await page.getByLabel('E-mail').fill(maker.email);
     await page.getByLabel('Password').fill(maker.password);
@@ -74,6 +75,9 @@ describe.skipIf(skip)('accessibility of the main pages', () => {
     for (const [path, heading] of [
       ['/library', 'Your library'],
       [`/library/${created.body.id}`, document.name],
+      [`/library/${created.body.id}/burns/new`, 'Log a burn'],
+      [`/library/${created.body.id}/burns/${burn.body.id}`, new Date('2026-11-30T10:00:00Z').toLocaleDateString('en-US').replace(/^/, 'Burn of ')],
+      [`/library/${created.body.id}/timer`, 'Burn timer'],
       [shared.body.shareUrlPath, document.name],
     ]) {
       await page.goto(server.url + path);

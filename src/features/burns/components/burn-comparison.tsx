@@ -35,7 +35,7 @@ export function BurnComparison({ burns, versions, lengthUnits }: { burns: Burn[]
         <figcaption className="text-sm text-ink-soft">Minutes from lighting, each point one burn, over the version it tested. The table below has the same numbers.</figcaption>
         <div className="h-72 w-full rounded-lg border border-rule bg-white p-2" aria-hidden="true" data-testid="burn-chart">
           <ResponsiveContainer width="100%" height="100%">
-            <ScatterChart margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
+            <ScatterChart accessibilityLayer={false} margin={{ top: 8, right: 12, bottom: 4, left: 0 }}>
               <CartesianGrid stroke="#d9d3c7" strokeDasharray="3 3" />
               <XAxis type="number" dataKey="version" name="Version" domain={[lowest - 0.5, highest + 0.5]} ticks={ticks} tickFormatter={(v: number) => `v${v}`} allowDecimals={false} />
               <YAxis type="number" dataKey="minutes" name="Minutes" unit=" min" width={64} />
