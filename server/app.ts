@@ -4,6 +4,9 @@ import { toNodeHandler } from 'better-auth/node';
 import { createAccountRepository } from './account/account-repository.ts';
 import { createAccountUseCases } from './account/account-use-cases.ts';
 import { createAdminUseCases } from './admin/admin-use-cases.ts';
+import { createArchiveRepository } from './archive/archive-repository.ts';
+import { createLibraryExport } from './archive/export-library.ts';
+import { createLibraryImport } from './archive/import-library.ts';
 import { createUserDirectory } from './admin/user-directory.ts';
 import type { Auth } from './auth/auth.ts';
 import type { Database } from './db/database.ts';
@@ -27,6 +30,7 @@ import { burnRoutes } from './routes/burn-routes.ts';
 import { designBodyParser, designRoutes } from './routes/design-routes.ts';
 import { devMailRoutes } from './routes/dev-mail-routes.ts';
 import { healthRoutes } from './routes/health-routes.ts';
+import { libraryRoutes } from './routes/library-routes.ts';
 import { printerProfileRoutes } from './routes/printer-profile-routes.ts';
 import type { RenderPool } from './render/render-pool.ts';
 import type { ObjectStore } from './storage/object-store.ts';
@@ -96,13 +100,19 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', loadSession(deps.auth));
 
   const db = deps.database.db;
-  app.use('/api/account', accountRoutes(createAccountUseCases(createAccountRepository(db))));
+  const account = createAccountUseCases(createAccountRepository(db));
+  app.use('/api/account', accountRoutes(account));
   app.use('/api/printer-profiles', printerProfileRoutes(createPrinterProfileUseCases(createPrinterProfileRepository(db))));
   const burnLog = createBurnLog(createBurnRepository(db), deps.store);
   const designLibrary = createDesignLibrary(createDesignRepository(db), { keysOf: burnLog.photoKeysOfDesign, forget: burnLog.forget });
   app.use('/api/designs', designRoutes(designLibrary));
   app.use('/api', burnRoutes(burnLog));
   app.use('/api/shared', sharedDesignRoutes(designLibrary));
+  const archives = createArchiveRepository(db);
+  app.use(
+    '/api/library',
+    libraryRoutes(createLibraryExport({ archives, store: deps.store, getAccount: account.getAccount, writtenBy: `Canwright ${deps.version}` }), createLibraryImport({ archives, store: deps.store })),
+  );
   app.use('/api/admin', adminRoutes(createAdminUseCases(deps.auth, createUserDirectory(db))));
   // Anyone else is answered as if there were no mailbox (404), so its existence is not told either.
   if (mailbox) app.use('/api/dev/mail', (req, res, next) => (mayRead(req) ? next() : apiNotFound(req, res, next)), devMailRoutes(mailbox.capture));

@@ -31,9 +31,10 @@ export class HttpClient {
     return this.readJson<T>(await this.send(path, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) }));
   }
 
-  /** Sends one file as multipart/form-data, as a browser's file input does. */
-  async upload<T = any>(path: string, field: string, bytes: Uint8Array, fileName: string, type = 'application/octet-stream'): Promise<HttpResponse<T>> {
+  /** Sends one file as multipart/form-data, as a browser's file input does, with any text fields of the form before it. */
+  async upload<T = any>(path: string, field: string, bytes: Uint8Array, fileName: string, type = 'application/octet-stream', fields: Record<string, string> = {}): Promise<HttpResponse<T>> {
     const form = new FormData();
+    for (const [name, value] of Object.entries(fields)) form.append(name, value);
     form.append(field, new Blob([new Uint8Array(bytes)], { type }), fileName);
     return this.readJson<T>(await this.send(path, { method: 'POST', headers: this.headers({ Accept: 'application/json' }), body: form }));
   }
