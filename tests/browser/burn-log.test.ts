@@ -115,4 +115,22 @@ describe.skipIf(skip)('a maker times a test burn on a phone, logs it with a phot
     expect(overflow).toBeLessThanOrEqual(0);
     await page.screenshot({ path: artifactPath('burn-design-page-390.png'), fullPage: true });
   });
+
+  it('keeps an entry on the phone when the connection drops, and saves it later', async () => {
+    await page.goto(`${server.url}/library/${designId}/burns/new`);
+    await page.getByLabel('Notes').fill('Written with no signal at the allotment');
+    // No signal: the request never reaches the server.
+    await page.route('**/api/designs/*/burns', (route) => (route.request().method() === 'POST' ? route.abort('internetdisconnected') : route.continue()));
+    await page.getByRole('button', { name: 'Save the entry' }).click();
+    await page.getByText('This entry is kept on this device and nothing is lost').waitFor();
+    await page.unroute('**/api/designs/*/burns');
+
+    await page.goto(`${server.url}/library/${designId}`);
+    await page.getByText('1 entry is kept on this device and not yet saved.').waitFor();
+    await page.getByRole('button', { name: 'Save them now' }).click();
+    await page.getByText('Written with no signal at the allotment').waitFor();
+    const http = await signedInClient(server, maker);
+    expect((await http.get(`/api/designs/${designId}/burns`)).body.burns.map((b: { notes: string | null }) => b.notes)).toContain('Written with no signal at the allotment');
+    expect(await page.evaluate(() => localStorage.getItem('canwright.unsaved-burns.v1'))).toBe('[]');
+  });
 });

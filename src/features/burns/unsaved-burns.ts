@@ -29,3 +29,6 @@ export function keepUnsaved(entry: UnsavedBurn, storage: Pick<Storage, 'getItem'
 export function dropUnsaved(key: string, storage: Pick<Storage, 'getItem' | 'setItem'> = localStorage): void {
   storage.setItem(KEY, JSON.stringify(listUnsaved(storage).filter((u) => u.key !== key)));
 }
+
+/** The form being written for a design, kept on every change until the entry is saved or kept above. */
+export const draftKey = (designId: string) => `canwright.burn-draft.v1.${designId}`;

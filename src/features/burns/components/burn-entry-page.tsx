@@ -13,13 +13,11 @@ import { useLogBurn } from '../api/log-burn.ts';
 import { useUpdateBurn } from '../api/update-burn.ts';
 import { emptyFormValues, formKeyOfField, formValuesOf, type BurnFormErrors, type BurnFormValues } from '../burn-form-values.ts';
 import { loadTimer, saveTimer, timerSummary } from '../burn-timer.ts';
-import { dropUnsaved, keepUnsaved } from '../unsaved-burns.ts';
+import { draftKey, dropUnsaved, keepUnsaved } from '../unsaved-burns.ts';
 import { useBurnUnits } from '../use-burn-units.ts';
 import { BurnEntryForm } from './burn-entry-form.tsx';
 import { BurnPhotos } from './burn-photos.tsx';
 import { BurnSafetyNote } from './burn-safety-note.tsx';
-
-const draftKey = (designId: string) => `canwright.burn-draft.v1.${designId}`;
 
 /** Server field problems, onto the boxes that hold them. */
 function boxErrors(error: unknown): BurnFormErrors {
@@ -65,8 +63,12 @@ export function NewBurnPage() {
       if (loadTimer()?.designId === designId && search.get('from') === 'timer') saveTimer(null);
       await navigate(`/library/${encodeURIComponent(designId)}/burns/${encodeURIComponent(burn.id)}?saved=1`);
     } catch (error) {
-      if (isOffline(error)) setKept(true);
-      else dropUnsaved(key);
+      if (isOffline(error)) {
+        // Kept whole in the list of unsaved entries (the timer's times with it); neither the form's draft nor the timer is needed twice.
+        localStorage.removeItem(draftKey(designId));
+        if (loadTimer()?.designId === designId && search.get('from') === 'timer') saveTimer(null);
+        setKept(true);
+      } else dropUnsaved(key);
     }
   }
 
