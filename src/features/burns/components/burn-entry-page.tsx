@@ -147,7 +147,7 @@ export function BurnEntryPage() {
         {update.isError && <Notice tone="error">{update.error.message}</Notice>}
       </div>
       {/* On a phone the photos come first (the next thing after saving); on a wide screen they sit beside the form. */}
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1.5fr)_minmax(0,1fr)] lg:items-start">
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1.5fr)_minmax(0,1fr)] lg:grid-rows-[auto_1fr] lg:items-start">
         <div className="lg:col-start-2 lg:row-start-1">
           <BurnPhotos burn={entry} />
         </div>

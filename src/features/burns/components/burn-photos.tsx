@@ -53,8 +53,8 @@ export function BurnPhotos({ burn }: { burn: Burn }) {
               <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-md border border-rule">
                 <img src={photo.thumbnailUrl} alt={`Photo ${i + 1} of the burn`} width={photo.width} height={photo.height} loading="lazy" className="aspect-square h-auto w-full object-cover" />
               </a>
-              <button type="button" onClick={() => remove.mutate(photo.id)} disabled={remove.isPending} className="min-h-9 text-sm text-danger underline">
-                Delete photo {i + 1}
+              <button type="button" onClick={() => remove.mutate(photo.id)} disabled={remove.isPending} aria-label={`Delete photo ${i + 1}`} className="min-h-9 text-sm text-danger underline">
+                Delete
               </button>
             </li>
           ))}
