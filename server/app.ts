@@ -3,12 +3,14 @@ import helmet from 'helmet';
 import { toNodeHandler } from 'better-auth/node';
 import { createAccountRepository } from './account/account-repository.ts';
 import { createAccountUseCases } from './account/account-use-cases.ts';
+import { createAccountDeletion } from './account/delete-account.ts';
 import { createAdminUseCases } from './admin/admin-use-cases.ts';
 import { createArchiveRepository } from './archive/archive-repository.ts';
 import { createLibraryExport } from './archive/export-library.ts';
 import { createLibraryImport } from './archive/import-library.ts';
 import { createUserDirectory } from './admin/user-directory.ts';
 import type { Auth } from './auth/auth.ts';
+import { passwordMatches, sessionCookieNames } from './auth/confirm-password.ts';
 import type { Database } from './db/database.ts';
 import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
@@ -83,7 +85,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/auth', express.json({ limit: BODY_LIMIT, type: () => true }));
   // Per account, from any address: failed sign-ins back off, and account mail cannot flood an inbox.
   app.post('/api/auth/sign-in/email', limits.failedSignInsPerAccount);
-  app.post(['/api/auth/request-password-reset', '/api/auth/send-verification-email'], limits.accountMailPerAccount);
+  app.post(['/api/auth/request-password-reset', '/api/auth/send-verification-email', '/api/auth/change-email'], limits.accountMailPerAccount);
   app.use('/api/auth', passClientAddress);
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
   // Render routes parse their own (smaller) bodies and need no session.
@@ -100,8 +102,12 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', loadSession(deps.auth));
 
   const db = deps.database.db;
-  const account = createAccountUseCases(createAccountRepository(db));
-  app.use('/api/account', accountRoutes(account));
+  const accounts = createAccountRepository(db);
+  const account = createAccountUseCases(accounts);
+  const deletion = createAccountDeletion({ accounts, store: deps.store, passwordMatches: (userId, password) => passwordMatches(deps.auth, userId, password) });
+  // A wrong password on deletion counts like a failed sign-in: the session alone must not be a way to guess it.
+  app.use('/api/account/delete', limits.failedConfirmationsPerAccount);
+  app.use('/api/account', accountRoutes(account, deletion, () => sessionCookieNames(deps.auth)));
   app.use('/api/printer-profiles', printerProfileRoutes(createPrinterProfileUseCases(createPrinterProfileRepository(db))));
   const burnLog = createBurnLog(createBurnRepository(db), deps.store);
   const designLibrary = createDesignLibrary(createDesignRepository(db), { keysOf: burnLog.photoKeysOfDesign, forget: burnLog.forget });

@@ -26,6 +26,11 @@ export function createAccountUseCases(accounts: AccountRepository) {
 
   return {
     getAccount,
+    /** The display name; the session reads the user row on every request, so it shows at once. */
+    async changeName(userId: string, name: string): Promise<Account> {
+      await accounts.setName(userId, name);
+      return getAccount(userId);
+    },
     async updatePreferences(userId: string, preferences: Preferences): Promise<Account> {
       const unknown = preferences.drillSetIds?.find((id) => !findDrill(id));
       if (unknown) throw new AppError(400, 'INVALID_INPUT', 'Some fields are not valid.', { fields: [{ path: 'drillSetIds', message: `Unknown drill "${unknown}"` }] });

@@ -8,7 +8,8 @@ import type { Db } from '../db/database.ts';
 import { schema } from '../db/schema.ts';
 import { CLIENT_ADDRESS_HEADER, type RateLimitPolicy } from '../http/rate-limits.ts';
 import type { Mailer, OutgoingMail } from '../mail/mailer.ts';
-import { alreadySignedUpMail, passwordResetMail, verificationMail } from '../mail/messages.ts';
+import { DISPLAY_NAME_MAX, emailTakenUrl } from '../../shared/account/account-changes.ts';
+import { alreadySignedUpMail, emailChangeMail, passwordResetMail, verificationMail } from '../mail/messages.ts';
 import { accessControl, authRoles } from './roles.ts';
 
 export interface AuthConfig {
@@ -50,6 +51,10 @@ export function createAuth(config: AuthConfig) {
       additionalFields: {
         units: { type: 'string', required: false, defaultValue: 'in', input: false },
       },
+      // A new address is confirmed by a link mailed to it (sendVerificationEmail below); until it
+      // is opened, the account keeps its old address. An address taken by another account gets
+      // the same answer and no mail, so the form does not tell who has an account.
+      changeEmail: { enabled: true },
     },
     emailAndPassword: {
       enabled: true,
@@ -72,8 +77,10 @@ export function createAuth(config: AuthConfig) {
     emailVerification: {
       sendOnSignUp: true,
       sendOnSignIn: true,
-      async sendVerificationEmail({ user, url }) {
-        sendLater(config.mailer, verificationMail(user.email, user.name, landOnVerifyPage(url)));
+      async sendVerificationEmail({ user, url }, request) {
+        // better-auth sends the link for a new address through here too, with the new address as user.email.
+        const changing = request !== undefined && new URL(request.url).pathname.endsWith('/change-email');
+        sendLater(config.mailer, changing ? emailChangeMail(user.email, user.name, url) : verificationMail(user.email, user.name, landOnVerifyPage(url)));
       },
     },
     plugins: [
@@ -106,6 +113,7 @@ function authRateLimit(policy: RateLimitPolicy) {
       '/sign-up/*': perMinute(policy.signUpsPerAddress),
       '/request-password-reset': perMinute(policy.accountMailPerAddress),
       '/send-verification-email': perMinute(policy.accountMailPerAddress),
+      '/change-email': perMinute(policy.accountMailPerAddress),
     },
   };
 }
@@ -126,16 +134,40 @@ export type Auth = ReturnType<typeof createAuth>;
 
 /**
  * The same boundary as the app's own routes: no control character in any string of a body, and
- * a profile's name is text when given (better-auth would pass null on to the database).
+ * a profile's name is text of at most DISPLAY_NAME_MAX characters when given (better-auth would
+ * pass null on to the database, and takes any length).
  */
 const refuseBadAuthInput = createAuthMiddleware(async (ctx) => {
   const body: unknown = ctx.body;
   const bad = findControlCharacter(body);
   if (bad !== undefined) throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: `${bad} ${CONTROL_CHARACTER_MESSAGE}.` });
-  if (ctx.path === '/update-user' && body && typeof body === 'object' && 'name' in body && (typeof body.name !== 'string' || body.name.trim() === '')) {
-    throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: 'name must be text (your name as others see it).' });
+  const namesUser = ctx.path === '/update-user' || ctx.path === '/sign-up/email';
+  if (namesUser && body && typeof body === 'object' && 'name' in body) {
+    if (typeof body.name !== 'string' || body.name.trim() === '') throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: 'name must be text (your name as others see it).' });
+    if (body.name.trim().length > DISPLAY_NAME_MAX) throw new APIError('BAD_REQUEST', { code: 'INVALID_INPUT', message: `name must have at most ${DISPLAY_NAME_MAX} characters.` });
   }
+  if (ctx.path === '/verify-email') await refuseTakenAddress(ctx);
 });
+
+/**
+ * A link for a new address is opened after another account took that address meanwhile: the
+ * change cannot be made (better-auth would meet the unique index and answer 500), so the browser
+ * goes back to the account page, which says so. The token is only read here, never trusted:
+ * better-auth checks its signature when it is used.
+ */
+async function refuseTakenAddress(ctx: Parameters<Parameters<typeof createAuthMiddleware>[0]>[0]): Promise<void> {
+  const token = (ctx.query as { token?: unknown } | undefined)?.token;
+  const payload = typeof token === 'string' ? token.split('.')[1] : undefined;
+  if (!payload) return;
+  let claims: { requestType?: unknown; updateTo?: unknown };
+  try {
+    claims = JSON.parse(Buffer.from(payload, 'base64url').toString('utf8')) as typeof claims;
+  } catch {
+    return;
+  }
+  if (claims.requestType !== 'change-email-verification' || typeof claims.updateTo !== 'string') return;
+  if (await ctx.context.internalAdapter.findUserByEmail(claims.updateTo)) throw ctx.redirect(emailTakenUrl);
+}
 
 /** Sends without holding up the answer; a failure is logged (address and subject only). */
 function sendLater(mailer: Mailer, mail: OutgoingMail): void {

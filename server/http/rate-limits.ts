@@ -1,4 +1,4 @@
-import type { Request, RequestHandler } from 'express';
+import type { Request, RequestHandler, Response } from 'express';
 import { ipKeyGenerator, rateLimit, type RateLimitRequestHandler, type Store } from 'express-rate-limit';
 import type { Database } from '../db/database.ts';
 import { RequestCountStore } from './request-count-store.ts';
@@ -25,6 +25,8 @@ export interface RateLimitPolicy {
   failedSignInsPerAccount: number;
   /** Account mail to one address, from anywhere, so nobody's inbox can be flooded. */
   accountMailPerAccount: number;
+  /** Wrong passwords typed to confirm a change of a signed-in account (deleting it), per account. */
+  failedConfirmationsPerAccount: number;
 }
 
 export const productionLimits: RateLimitPolicy = {
@@ -35,6 +37,7 @@ export const productionLimits: RateLimitPolicy = {
   accountMailPerAddress: 10,
   failedSignInsPerAccount: 5,
   accountMailPerAccount: 3,
+  failedConfirmationsPerAccount: 5,
 };
 
 export const developmentLimits: RateLimitPolicy = Object.fromEntries(
@@ -61,6 +64,7 @@ export interface AppRateLimits {
   renders: RequestHandler;
   failedSignInsPerAccount: RequestHandler;
   accountMailPerAccount: RequestHandler;
+  failedConfirmationsPerAccount: RequestHandler;
 }
 
 /**
@@ -86,6 +90,14 @@ export function createAppRateLimits(database: Database, policy: RateLimitPolicy)
       byAccount,
     ),
     accountMailPerAccount: limiter({ limit: policy.accountMailPerAccount, key: byAccount, store: store('mail:'), skip: (req) => accountOf(req) === undefined }),
+    // Keyed by the signed-in user (the session was read before), counting only refusals.
+    failedConfirmationsPerAccount: limiter({
+      limit: policy.failedConfirmationsPerAccount,
+      key: (_req, res) => res.locals.user?.id ?? '',
+      store: store('confirm:'),
+      skip: (_req, res) => !res.locals.user,
+      onlyFailures: true,
+    }),
   };
 }
 
@@ -99,7 +111,7 @@ function forgetOnSuccess(limit: RateLimitRequestHandler, key: (req: Request) => 
   };
 }
 
-function limiter(options: { limit: number; key: (req: Request) => string; store: Store | undefined; skip?: (req: Request) => boolean; onlyFailures?: boolean }): RateLimitRequestHandler {
+function limiter(options: { limit: number; key: (req: Request, res: Response) => string; store: Store | undefined; skip?: (req: Request, res: Response) => boolean; onlyFailures?: boolean }): RateLimitRequestHandler {
   return rateLimit({
     windowMs: WINDOW_MS,
     limit: options.limit,
@@ -122,8 +134,9 @@ function limiter(options: { limit: number; key: (req: Request) => string; store:
   });
 }
 
-/** The account a sign-in or account-mail request is about: its e-mail address, as better-auth compares them. */
+/** The account a sign-in or account-mail request is about: its e-mail address (the new one of an address change), as better-auth compares them. */
 function accountOf(req: Request): string | undefined {
-  const email: unknown = (req.body as { email?: unknown } | undefined)?.email;
+  const body = req.body as { email?: unknown; newEmail?: unknown } | undefined;
+  const email: unknown = body?.email ?? body?.newEmail;
   return typeof email === 'string' && email.trim() !== '' ? email.trim().toLowerCase() : undefined;
 }

@@ -18,6 +18,23 @@ export function verificationMail(to: string, name: string, url: string): Outgoin
   };
 }
 
+/** Sent to the NEW address when a maker changes theirs: the change happens only when this link is opened. */
+export function emailChangeMail(to: string, name: string, url: string): OutgoingMail {
+  return {
+    to,
+    subject: 'Confirm your new e-mail address for Canwright',
+    text: [
+      `Hello ${name},`,
+      '',
+      'You asked to use this address for your Canwright account. Open this link to confirm it:',
+      '',
+      url,
+      '',
+      'Until you do, the account keeps its old address. The link works for one hour. If you did not ask for this, ignore this message.',
+    ].join('\n'),
+  };
+}
+
 export function passwordResetMail(to: string, name: string, url: string): OutgoingMail {
   return {
     to,
