@@ -28,6 +28,9 @@ const validBodies: Record<string, () => Record<string, unknown>> = {
   'POST /api/printer-profiles': () => ({ name: 'Fuzz', measuredXMm: 150, measuredYMm: 200 }),
   'PATCH /api/printer-profiles/:id': () => ({ name: 'Fuzz', measuredXMm: 150.2 }),
   'PATCH /api/account/preferences': () => ({ units: 'mm', defaultPaper: 'a4', drillSetIds: ['frac:1/4'] }),
+  'PATCH /api/account': () => ({ name: 'Fuzz Maker' }),
+  // Not the owner's password (the fuzz must not delete the account the other routes use).
+  'POST /api/account/delete': () => ({ password: 'not-the-fuzz-password' }),
   'PATCH /api/admin/users/:id': () => ({ role: 'instructor', disabled: false }),
   'POST /api/designs/:id/burns': () => ({ date: '2026-11-30T10:00:00Z', fuelKind: 'pellets', fuelMassG: 120, wind: 'light', windscreen: true, timeToJetsS: 140, flameRing: 4, smoke: 'some', notes: 'fuzz', version: 1 }),
   'PATCH /api/burns/:burnId': () => ({ notes: 'fuzzed', charG: 12, ambientC: 5, date: '2026-12-01T10:00:00+01:00' }),

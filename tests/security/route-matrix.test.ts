@@ -39,12 +39,18 @@ const bodies: Record<string, () => unknown> = {
   'PATCH /api/admin/users/:id': () => ({ role: 'admin', disabled: true }),
   'POST /api/designs/:id/burns': () => ({ date: '2026-11-30T10:00:00Z', notes: 'taken over' }),
   'PATCH /api/burns/:burnId': () => ({ notes: 'taken over' }),
+  // Each actor acts on their own account here; a wrong password, so that none deletes theirs.
+  'PATCH /api/account': () => ({ name: 'Taken over' }),
+  'POST /api/account/delete': () => ({ password: 'not-the-owners-password' }),
 };
 
 /** Routes that take a file rather than JSON: the request an owner's browser would send. */
 let photo: Buffer;
+/** A library exported by a maker of its own (nothing of the owner's in it): an import always goes into the caller's own account. */
+let archive: Uint8Array;
 const uploads: Record<string, (http: HttpClient, path: string) => Promise<HttpResponse>> = {
   'POST /api/burns/:burnId/photos': (http, path) => http.upload(path, 'photo', photo, 'stove.jpg', 'image/jpeg'),
+  'POST /api/library/import': (http, path) => http.upload(path, 'archive', archive, 'library.zip', 'application/zip'),
 };
 const send = (http: HttpClient, route: RouteEntry, path: string) =>
   uploads[keyOf(route)]?.(http, path) ?? http.request(route.method, path, route.method === 'GET' || route.method === 'DELETE' ? undefined : (bodies[keyOf(route)]?.() ?? {}));
@@ -68,6 +74,9 @@ beforeAll(async () => {
   ownerEmail = first.email;
   owner = await signedInClient(server, first);
   target = await createResources(owner);
+  const archivist = await signedInClient(server, await createUser(server));
+  await archivist.post('/api/designs', { document: { ...document(), name: 'A stove of my own' } });
+  archive = (await archivist.bytes('/api/library/export')).bytes;
   actors = {
     'second maker': await signedInClient(server, await createUser(server)),
     instructor: await signedInClient(server, await createUser(server, { role: 'instructor' })),
