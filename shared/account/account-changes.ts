@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
-/** The longest display name: room for a full name with a workshop's name beside it. Our own limit (common practice, no source). */
-export const DISPLAY_NAME_MAX = 80;
+/** The longest display name, the sign-up form's limit too: room for a full name with a workshop's name beside it (common practice, no source). */
+export const DISPLAY_NAME_MAX = 100;
 
 /** A display name as others see it: trimmed, not empty, at most DISPLAY_NAME_MAX characters. */
 export const displayNameSchema = z
@@ -13,10 +13,6 @@ export const displayNameSchema = z
 /** PATCH /api/account: the display name. */
 export const changeNameInputSchema = z.object({ name: displayNameSchema }).strict();
 export type ChangeNameInput = z.infer<typeof changeNameInputSchema>;
-
-/** The e-mail change form; the address itself goes to better-auth's /change-email, which mails a link to it. */
-export const changeEmailFormSchema = z.object({ newEmail: z.string().trim().toLowerCase().email('must be an e-mail address, e.g. kit@workshop.example').max(254) });
-export type ChangeEmailForm = z.infer<typeof changeEmailFormSchema>;
 
 /** POST /api/account/delete: the password again, so a session left open on a shared computer cannot delete the account. */
 export const deleteAccountInputSchema = z.object({ password: z.string({ error: 'is required: type your password to confirm' }).min(1, 'is required: type your password to confirm').max(256) }).strict();

@@ -68,9 +68,10 @@ export async function fetchRetryingWhenBusy(
   }
 }
 
-/** Sends one file as multipart form data (the browser sets the boundary) and checks the answer. */
-export async function apiUpload<S extends z.ZodType>(path: string, schema: S, field: string, file: Blob, fileName: string): Promise<z.output<S>> {
+/** Sends one file as multipart form data (the browser sets the boundary), with any text fields before it, and checks the answer. */
+export async function apiUpload<S extends z.ZodType>(path: string, schema: S, field: string, file: Blob, fileName: string, fields: Record<string, string> = {}): Promise<z.output<S>> {
   const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) form.append(name, value);
   form.append(field, file, fileName);
   const response = await fetch(path, { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
   return readAnswer(response, path, schema);

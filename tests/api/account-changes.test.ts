@@ -31,7 +31,7 @@ describe('display name and e-mail address', () => {
     const cases: [unknown, string, string][] = [
       [{}, 'name', 'is required: give the name others should see'],
       [{ name: '   ' }, 'name', 'must not be empty: give the name others should see'],
-      [{ name: 'x'.repeat(81) }, 'name', 'must have at most 80 characters'],
+      [{ name: 'x'.repeat(101) }, 'name', 'must have at most 100 characters'],
       [{ name: null }, 'name', 'must be text (your name as others see it)'],
       [{ name: 'Kit', role: 'admin' }, '(body)', 'is not a field this takes: role'],
       [{ name: 'Kit\u0000' }, 'name', 'holds a control character (such as U+0000) that text cannot contain'],
@@ -42,9 +42,9 @@ describe('display name and e-mail address', () => {
       expect(answer.body.error.details.fields[0], JSON.stringify(body)).toEqual({ path, message });
     }
     // better-auth's own route keeps the same limit.
-    const viaAuth = await http.post('/api/auth/update-user', { name: 'y'.repeat(81) });
+    const viaAuth = await http.post('/api/auth/update-user', { name: 'y'.repeat(101) });
     expect(viaAuth.status).toBe(400);
-    expect(viaAuth.body.message).toBe('name must have at most 80 characters.');
+    expect(viaAuth.body.message).toBe('name must have at most 100 characters.');
     expect((await http.get('/api/account')).body).toMatchObject({ name: 'Kit Ashby-Moor', role: 'maker' });
     expect((await new HttpClient(server.url).patch('/api/account', { name: 'Anyone' })).status).toBe(401);
   });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { changePasswordFormSchema, emailFormSchema, newPasswordFormSchema, signInFormSchema, signUpFormSchema } from '../../../src/features/auth/form-schemas.ts';
+import { changeEmailFormSchema, changeNameFormSchema, changePasswordFormSchema, deleteAccountFormSchema, emailFormSchema, newPasswordFormSchema, signInFormSchema, signUpFormSchema } from '../../../src/features/auth/form-schemas.ts';
 
 /**
  * Phrases zod writes on its own (zod 3 and 4 default messages, from memory of their wording).
@@ -17,6 +17,9 @@ const forms: [string, z.ZodType, string[]][] = [
   ['forgot password / resend link', emailFormSchema, ['email']],
   ['new password', newPasswordFormSchema, ['password', 'confirm']],
   ['change password (account page)', changePasswordFormSchema, ['current', 'password', 'confirm']],
+  ['change name (account page)', changeNameFormSchema, ['name']],
+  ['change e-mail (account page)', changeEmailFormSchema, ['email']],
+  ['delete account (account page)', deleteAccountFormSchema, ['password']],
 ];
 
 /** Every message a form can give for one field set to `value`, the others filled in well. */

@@ -1,33 +1,35 @@
-import { roleLabels } from '../../../../shared/account/roles.ts';
+import { Link, useSearchParams } from 'react-router';
+import { Notice } from '../../../components/notice.tsx';
 import { Page } from '../../../components/page.tsx';
 import { useAccount } from '../api/get-account.ts';
 import { ChangePasswordForm } from './change-password-form.tsx';
-import { UnitsPreference } from './units-preference.tsx';
+import { DeleteAccount } from './delete-account.tsx';
+import { LibraryArchive } from './library-archive.tsx';
 import { PrintPreferences } from './print-preferences.tsx';
-import { Link } from 'react-router';
+import { ProfileForm } from './profile-form.tsx';
+import { UnitsPreference } from './units-preference.tsx';
+
+/** What the link of an e-mail change says when it lands here (?email=...). */
+const emailNotices: Record<string, { tone: 'success' | 'error'; text: string }> = {
+  changed: { tone: 'success', text: 'Your new e-mail address is confirmed: sign in with it from now on.' },
+  taken: { tone: 'error', text: 'That address now belongs to another account, so your e-mail address was not changed.' },
+};
 
 export function AccountPage() {
   const { data: account } = useAccount();
+  const [search] = useSearchParams();
+  const notice = emailNotices[search.get('email') ?? ''];
   if (!account) return null;
   return (
     <Page title="Your account" width="wide">
+      {notice && (
+        <div className="mb-4">
+          <Notice tone={notice.tone}>{notice.text}</Notice>
+        </div>
+      )}
       <div className="grid gap-6 md:grid-cols-2">
-        <section aria-labelledby="profile-heading" className="rounded-lg border border-rule bg-white p-5">
-          <h2 id="profile-heading" className="text-lg font-semibold">
-            Profile
-          </h2>
-          <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-2 text-sm">
-            <dt className="text-ink-soft">Name</dt>
-            <dd>{account.name}</dd>
-            <dt className="text-ink-soft">E-mail</dt>
-            <dd>
-              <span className="[overflow-wrap:anywhere]">{account.email}</span> {account.emailVerified && <span className="whitespace-nowrap text-ok">(confirmed)</span>}
-            </dd>
-            <dt className="text-ink-soft">Role</dt>
-            <dd>{roleLabels[account.role]}</dd>
-          </dl>
-        </section>
-        <UnitsPreference current={account.units} account={account} />
+        <ProfileForm account={account} />
+        <UnitsPreference current={account.units} />
         <PrintPreferences account={account} />
         <section aria-labelledby="printer-heading" className="rounded-lg border border-rule bg-white p-5">
           <h2 id="printer-heading" className="text-lg font-semibold">
@@ -41,6 +43,8 @@ export function AccountPage() {
           </p>
         </section>
         <ChangePasswordForm />
+        <LibraryArchive />
+        <DeleteAccount />
       </div>
     </Page>
   );
