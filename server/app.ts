@@ -38,6 +38,10 @@ import type { RenderPool } from './render/render-pool.ts';
 import type { ObjectStore } from './storage/object-store.ts';
 import { renderRoutes } from './routes/render-routes.ts';
 import { sharedDesignRoutes } from './routes/shared-design-routes.ts';
+import { workshopRoutes } from './routes/workshop-routes.ts';
+import type { Mailer } from './mail/mailer.ts';
+import { createWorkshopRepository } from './workshops/workshop-repository.ts';
+import { createWorkshopUseCases } from './workshops/workshop-use-cases.ts';
 
 export interface AppDeps {
   database: Database;
@@ -54,6 +58,10 @@ export interface AppDeps {
   store: ObjectStore;
   /** Worker threads that draw kits. */
   renderPool: RenderPool;
+  /** Workshop mail (invitations, kits) goes out through the same mailer as account mail. */
+  mailer: Mailer;
+  /** The site's public address, for links in mail. */
+  publicUrl: string;
   /** Folder of the built client; omitted in API tests. */
   clientDir?: string;
 }
@@ -109,11 +117,14 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api/account/delete', limits.failedConfirmationsPerAccount);
   app.use('/api/account', accountRoutes(account, deletion, () => sessionCookieNames(deps.auth)));
   app.use('/api/printer-profiles', printerProfileRoutes(createPrinterProfileUseCases(createPrinterProfileRepository(db))));
-  const burnLog = createBurnLog(createBurnRepository(db), deps.store);
-  const designLibrary = createDesignLibrary(createDesignRepository(db), { keysOf: burnLog.photoKeysOfDesign, forget: burnLog.forget });
+  const burnRepository = createBurnRepository(db);
+  const burnLog = createBurnLog(burnRepository, deps.store);
+  const workshops = createWorkshopUseCases({ workshops: createWorkshopRepository(db), burns: burnRepository, burnLog, mailer: deps.mailer, renderPool: deps.renderPool, publicUrl: deps.publicUrl });
+  const designLibrary = createDesignLibrary(createDesignRepository(db), { keysOf: burnLog.photoKeysOfDesign, forget: burnLog.forget }, { workshopsUsing: workshops.workshopsUsing });
   app.use('/api/designs', designRoutes(designLibrary));
   app.use('/api', burnRoutes(burnLog));
   app.use('/api/shared', sharedDesignRoutes(designLibrary));
+  app.use('/api/workshops', workshopRoutes(workshops, deps.renderPool));
   const archives = createArchiveRepository(db);
   app.use(
     '/api/library',

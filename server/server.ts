@@ -108,6 +108,8 @@ export async function startServer(options: ServerOptions): Promise<RunningServer
       rateLimits,
       renderPool,
       store,
+      mailer,
+      publicUrl: url,
       clientDir: options.clientDir,
     });
     handle = app;

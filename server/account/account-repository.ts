@@ -1,6 +1,6 @@
-import { and, count, eq, ne } from 'drizzle-orm';
+import { and, count, eq, ne, or } from 'drizzle-orm';
 import type { Db } from '../db/database.ts';
-import { burnPhotos, users, verifications } from '../db/schema.ts';
+import { burnPhotos, burns, designs, users, verifications } from '../db/schema.ts';
 
 export function createAccountRepository(db: Db) {
   return {
@@ -33,7 +33,13 @@ export function createAccountRepository(db: Db) {
       return db.transaction(async (tx) => {
         const [user] = await tx.select({ id: users.id }).from(users).where(eq(users.id, id)).for('update');
         if (!user) return false;
-        const photos = await tx.select({ image: burnPhotos.imageKey, thumbnail: burnPhotos.thumbnailKey }).from(burnPhotos).where(eq(burnPhotos.ownerId, id));
+        // Their own photos, and those of workshop members' burns of the user's designs (those rows go with the designs).
+        const photos = await tx
+          .select({ image: burnPhotos.imageKey, thumbnail: burnPhotos.thumbnailKey })
+          .from(burnPhotos)
+          .innerJoin(burns, eq(burns.id, burnPhotos.burnId))
+          .innerJoin(designs, eq(designs.id, burns.designId))
+          .where(or(eq(burnPhotos.ownerId, id), eq(designs.ownerId, id)));
         await removeFiles(photos.flatMap((p) => [p.image, p.thumbnail]));
         await tx.delete(verifications).where(eq(verifications.value, id));
         await tx.delete(users).where(eq(users.id, id));

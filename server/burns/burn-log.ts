@@ -114,9 +114,25 @@ export function createBurnLog(burns: BurnRepository, store: ObjectStore) {
       }
     },
 
-    /** The picture (or its thumbnail) of one of the owner's photos. */
+    /**
+     * A workshop member's burn of the workshop's kit: pinned to the kit's version of the
+     * instructor's design, owned by the member, and marked with the workshop.
+     */
+    async logKitBurn(ownerId: string, kit: { designId: string; versionId: string; version: number; workshopId: string }, input: Omit<CreateBurnInput, 'version'>): Promise<Burn> {
+      const { date, ...fields } = input;
+      const row = await burns.insert({ ownerId, designId: kit.designId, versionId: kit.versionId, workshopId: kit.workshopId, burnedAt: new Date(date), ...clean(fields) });
+      return view(row, kit.version, []);
+    },
+
+    /** Entries with their photos, as the API shows them. */
+    async views(rows: { burn: BurnRow; version: number }[]): Promise<Burn[]> {
+      const photos = await burns.photosOf(rows.map((r) => r.burn.id));
+      return rows.map((r) => view(r.burn, r.version, photos));
+    },
+
+    /** The picture (or its thumbnail) of one of the owner's photos, or of a burn in a workshop they run. */
     async readPhoto(ownerId: string, photoId: string, size: 'image' | 'thumbnail'): Promise<{ bytes: Uint8Array; contentType: string }> {
-      const row = await burns.findPhoto(ownerId, photoId);
+      const row = (await burns.findPhoto(ownerId, photoId)) ?? (await burns.findPhotoInWorkshopOf(ownerId, photoId));
       if (!row) throw missingPhoto();
       const bytes = await store.get(size === 'image' ? row.imageKey : row.thumbnailKey);
       if (!bytes) throw missingPhoto();

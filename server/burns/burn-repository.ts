@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { and, count, desc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/database.ts';
-import { burnPhotos, burns, designs, designVersions } from '../db/schema.ts';
+import { burnPhotos, burns, designs, designVersions, workshops } from '../db/schema.ts';
 
 export type BurnRow = typeof burns.$inferSelect;
 export type BurnPhotoRow = typeof burnPhotos.$inferSelect;
@@ -85,18 +85,33 @@ export function createBurnRepository(db: Db) {
       return row;
     },
 
+    /** A photo of a burn logged in a workshop the viewer runs: instructors see their group's photos. */
+    async findPhotoInWorkshopOf(instructorId: string, photoId: string): Promise<BurnPhotoRow | undefined> {
+      const [row] = await db
+        .select({ photo: burnPhotos })
+        .from(burnPhotos)
+        .innerJoin(burns, eq(burns.id, burnPhotos.burnId))
+        .innerJoin(workshops, eq(workshops.id, burns.workshopId))
+        .where(and(eq(burnPhotos.id, photoId), eq(workshops.ownerId, instructorId)));
+      return row?.photo;
+    },
+
     async removePhoto(ownerId: string, photoId: string): Promise<BurnPhotoRow | undefined> {
       const [row] = await db.delete(burnPhotos).where(and(eq(burnPhotos.id, photoId), eq(burnPhotos.ownerId, ownerId))).returning();
       return row;
     },
 
-    /** Storage keys of every photo of every burn of a design (before the design is deleted). */
+    /**
+     * Storage keys of every photo of every burn of the owner's design (before the design is
+     * deleted), workshop members' burns of it included: those rows go with the design too.
+     */
     async photoKeysOfDesign(ownerId: string, designId: string): Promise<string[]> {
       const rows = await db
         .select({ image: burnPhotos.imageKey, thumbnail: burnPhotos.thumbnailKey })
         .from(burnPhotos)
         .innerJoin(burns, eq(burns.id, burnPhotos.burnId))
-        .where(and(eq(burns.designId, designId), eq(burns.ownerId, ownerId)));
+        .innerJoin(designs, eq(designs.id, burns.designId))
+        .where(and(eq(burns.designId, designId), eq(designs.ownerId, ownerId)));
       return rows.flatMap((p) => [p.image, p.thumbnail]);
     },
   };

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { bigint, boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, unique, uniqueIndex } from 'drizzle-orm/pg-core';
+import { bigint, boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, unique, uniqueIndex, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import type { Design } from '../../shared/design/design-schema.ts';
 import type { DesignSummary } from '../../shared/library/library-schemas.ts';
 
@@ -182,10 +182,12 @@ export const burns = pgTable(
     smoke: text('smoke'),
     flameRing: integer('flame_ring'),
     notes: text('notes'),
+    /** Set when a workshop member logged this burn of their stove built from the workshop's kit. */
+    workshopId: text('workshop_id').references((): AnyPgColumn => workshops.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (table) => [index('burns_design_id_idx').on(table.designId), index('burns_owner_id_idx').on(table.ownerId)],
+  (table) => [index('burns_design_id_idx').on(table.designId), index('burns_owner_id_idx').on(table.ownerId), index('burns_workshop_id_idx').on(table.workshopId)],
 );
 
 /** Photos of a burn: the picture and its thumbnail live in the object store under these keys. */
@@ -211,6 +213,75 @@ export const burnPhotos = pgTable(
 );
 
 /**
+ * An instructor's build session. The kit is one saved version of one of the instructor's designs
+ * (version_id, pinned; kit_moved_at is set when the instructor moves it). join_code is null while
+ * joining by code is off; closed_at makes the workshop read-only.
+ */
+export const workshops = pgTable(
+  'workshops',
+  {
+    id: text('id').primaryKey(),
+    ownerId: text('owner_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    title: text('title').notNull(),
+    startsAt: timestamp('starts_at', { withTimezone: true }).notNull(),
+    place: text('place').notNull().default(''),
+    notes: text('notes').notNull().default(''),
+    capacity: integer('capacity').notNull(),
+    defaultPaper: text('default_paper').notNull().default('letter'),
+    // No action (checked at the end of the statement): deleting the instructor's account takes the
+    // workshop and the design together; deleting only the design is refused while a workshop uses it.
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id),
+    versionId: text('version_id')
+      .notNull()
+      .references(() => designVersions.id),
+    joinCode: text('join_code').unique(),
+    kitMovedAt: timestamp('kit_moved_at', { withTimezone: true }),
+    closedAt: timestamp('closed_at', { withTimezone: true }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [index('workshops_owner_id_idx').on(table.ownerId), index('workshops_design_id_idx').on(table.designId)],
+);
+
+/** One invitation per address and workshop; only a hash of the link's token is kept. */
+export const workshopInvitations = pgTable(
+  'workshop_invitations',
+  {
+    id: text('id').primaryKey(),
+    workshopId: text('workshop_id')
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    email: text('email').notNull(),
+    tokenHash: text('token_hash').notNull().unique(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    sentAt: timestamp('sent_at', { withTimezone: true }).notNull().defaultNow(),
+    acceptedAt: timestamp('accepted_at', { withTimezone: true }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [unique('workshop_invitations_workshop_email_unique').on(table.workshopId, table.email)],
+);
+
+/** Who is in a workshop; printed_at is set when they print the kit from the workshop. */
+export const workshopMembers = pgTable(
+  'workshop_members',
+  {
+    workshopId: text('workshop_id')
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    joinedAt: timestamp('joined_at', { withTimezone: true }).notNull().defaultNow(),
+    printedAt: timestamp('printed_at', { withTimezone: true }),
+  },
+  (table) => [primaryKey({ columns: [table.workshopId, table.userId] }), index('workshop_members_user_id_idx').on(table.userId)],
+);
+
+/**
  * better-auth's rate-limit counts (its "database" storage), so that every server on one database
  * counts the same sign-in tries. last_request is a time in milliseconds since 1970, as better-auth keeps it.
  */
@@ -228,4 +299,4 @@ export const requestCounts = pgTable('request_counts', {
   resetAt: timestamp('reset_at', { withTimezone: true }).notNull(),
 });
 
-export const schema = { users, sessions, accounts, verifications, rateLimits, printerProfiles, designs, designVersions, burns, burnPhotos, requestCounts };
+export const schema = { users, sessions, accounts, verifications, rateLimits, printerProfiles, designs, designVersions, burns, burnPhotos, requestCounts, workshops, workshopInvitations, workshopMembers };

@@ -32,8 +32,13 @@ export interface DesignFiles {
   forget(keys: string[]): Promise<void>;
 }
 
+/** What else uses a design: a workshop's kit keeps its design from being deleted. */
+export interface DesignUses {
+  workshopsUsing(designId: string): Promise<string[]>;
+}
+
 /** A signed-in maker's saved designs. Only the share link reads a design without its owner. */
-export function createDesignUseCases(designs: DesignRepository, files?: DesignFiles) {
+export function createDesignUseCases(designs: DesignRepository, files?: DesignFiles, uses?: DesignUses) {
   /** Runs a change that answers the changed row, then reads the design back with its current version. */
   async function changeThenRead(ownerId: string, change: Promise<DesignRow | undefined>): Promise<DesignDetail> {
     const row = await change;
@@ -77,6 +82,11 @@ export function createDesignUseCases(designs: DesignRepository, files?: DesignFi
     },
 
     async deleteDesign(ownerId: string, id: string): Promise<void> {
+      const workshops = (await designs.find(ownerId, id)) ? ((await uses?.workshopsUsing(id)) ?? []) : [];
+      if (workshops.length > 0) {
+        const names = workshops.map((t) => `“${t}”`).join(', ');
+        throw new AppError(409, 'DESIGN_IN_USE', `This design is the kit of the workshop${workshops.length === 1 ? '' : 's'} ${names}. Delete ${workshops.length === 1 ? 'that workshop' : 'those workshops'} first; closing keeps the kit.`);
+      }
       const keys = (await files?.keysOf(ownerId, id)) ?? [];
       if (!(await designs.remove(ownerId, id))) throw missingDesign();
       await files?.forget(keys);

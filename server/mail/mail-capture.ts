@@ -10,6 +10,8 @@ export interface CapturedMail {
   to: string[];
   subject: string;
   text: string;
+  /** Files sent with the message (a kit's PDF). */
+  attachments: { filename: string; contentType: string; content: Buffer }[];
 }
 
 export interface MailCapture {
@@ -48,6 +50,7 @@ export async function startMailCapture(): Promise<MailCapture> {
             to: session.envelope.rcptTo.map((rcpt) => rcpt.address.toLowerCase()),
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
+            attachments: parsed.attachments.map((a) => ({ filename: a.filename ?? 'attachment', contentType: a.contentType, content: a.content })),
           };
           messages.unshift(mail);
           messages.length = Math.min(messages.length, keep);

@@ -4,6 +4,7 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 export interface Mailer {

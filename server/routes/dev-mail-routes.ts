@@ -5,7 +5,9 @@ import type { MailCapture } from '../mail/mail-capture.ts';
 export function devMailRoutes(capture: MailCapture): Router {
   const router = Router();
   router.get('/', (_req, res) => {
-    res.set('Cache-Control', 'no-store').json({ messages: capture.list() });
+    // Attachments are named with their size; their bytes stay in the capture.
+    const messages = capture.list().map(({ attachments, ...mail }) => ({ ...mail, attachments: attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, bytes: a.content.length })) }));
+    res.set('Cache-Control', 'no-store').json({ messages });
   });
   return router;
 }
