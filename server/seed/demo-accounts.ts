@@ -12,10 +12,12 @@ export interface DemoAccount {
   role: Role;
   /** Gets the demo designs in its library when the account is first made. */
   withDemoLibrary?: boolean;
+  /** Runs the demo workshop, with the demo-library account as a member. */
+  runsDemoWorkshop?: boolean;
 }
 
 export const demoAccounts: DemoAccount[] = [
   { name: 'Robin Maker', email: 'maker@alder-street.example', password: 'demo-maker-stove', role: 'maker', withDemoLibrary: true },
-  { name: 'Jo Instructor', email: 'instructor@alder-street.example', password: 'demo-instructor-stove', role: 'instructor' },
+  { name: 'Jo Instructor', email: 'instructor@alder-street.example', password: 'demo-instructor-stove', role: 'instructor', runsDemoWorkshop: true },
   { name: 'Sam Admin', email: 'admin@alder-street.example', password: 'demo-admin-stove', role: 'admin' },
 ];

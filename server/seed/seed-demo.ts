@@ -10,15 +10,19 @@ import { demoAccounts, type DemoAccount } from './demo-accounts.ts';
 import type { ObjectStore } from '../storage/object-store.ts';
 import { seedDemoBurns } from './demo-burns.ts';
 import { seedDemoLibrary } from './demo-designs.ts';
+import { seedDemoWorkshop } from './demo-workshop.ts';
+import { createWorkshopRepository } from '../workshops/workshop-repository.ts';
 
 /**
  * Creates the demo accounts that are missing, verified and with their roles, and fills the demo
- * maker's library and the class stove's burn log (photos go to `store`). Idempotent: an account that exists is left alone (its password may have been
+ * maker's library and the class stove's burn log (photos go to `store`), and the instructor's
+ * workshop with the maker in it. Idempotent: an account that exists is left alone (its password may have been
  * changed, its designs deleted, on purpose).
  * Uses better-auth's server-side admin API (no request, so no session is needed).
  */
 export async function seedDemo(db: Db, auth: Auth, store: ObjectStore, accounts: DemoAccount[] = demoAccounts): Promise<{ created: string[] }> {
   const created: string[] = [];
+  const ids = new Map<DemoAccount, string>();
   for (const account of accounts) {
     const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email));
     if (existing) continue;
@@ -29,7 +33,22 @@ export async function seedDemo(db: Db, auth: Auth, store: ObjectStore, accounts:
       const { classStoveId } = await seedDemoLibrary(createDesignLibrary(createDesignRepository(db)), user.id);
       await seedDemoBurns(createBurnLog(createBurnRepository(db), store), user.id, classStoveId);
     }
+    ids.set(account, user.id);
     created.push(account.email);
+  }
+  // The workshop needs both its instructor and its member, and is made with the instructor only.
+  const instructor = accounts.find((a) => a.runsDemoWorkshop);
+  const member = accounts.find((a) => a.withDemoLibrary);
+  const instructorId = instructor && ids.get(instructor);
+  if (instructorId && member) {
+    const [row] = await db.select({ id: users.id }).from(users).where(eq(users.email, member.email));
+    if (row) {
+      await seedDemoWorkshop(
+        { library: createDesignLibrary(createDesignRepository(db)), workshops: createWorkshopRepository(db), burnLog: createBurnLog(createBurnRepository(db), store) },
+        instructorId,
+        row.id,
+      );
+    }
   }
   return { created };
 }

@@ -34,8 +34,17 @@ describe('demo seed', () => {
     const { versions } = (await maker.get(`/api/designs/${pint.id}/versions`)).body;
     // Version 1 has 14 jets, version 2 the example's 16: the change line counts them.
     expect(versions).toHaveLength(2);
+  });
+
+  it("gives the demo instructor a workshop with the demo maker in it, printed and burned once", async () => {
     const instructor = await signedInClient(server, demoAccounts.find((a) => a.role === 'instructor')!);
-    expect((await instructor.get('/api/designs')).body.designs).toEqual([]);
+    expect((await instructor.get('/api/designs')).body.designs.map((d: { name: string }) => d.name)).toEqual(['Alder Street evening build stove']);
+    const [listed] = (await instructor.get('/api/workshops')).body.workshops;
+    expect(listed).toMatchObject({ title: 'Thursday evening stove build', role: 'instructor', members: 1 });
+    const workshop = (await instructor.get(`/api/workshops/${listed.id}`)).body;
+    expect(workshop.roster.map((r: { status: string }) => r.status).sort()).toEqual(['burned', 'invited', 'invited']);
+    const maker = await signedInClient(server, demoAccounts.find((a) => a.withDemoLibrary)!);
+    expect((await maker.get(`/api/workshops/${listed.id}`)).body).toMatchObject({ role: 'member', roster: null });
   });
 
   it('logs the class stove\'s test burns on both versions, with drawn photos', async () => {
