@@ -49,6 +49,9 @@ export function Layout() {
                 <NavLink to="/library" className={navClass}>
                   Library
                 </NavLink>
+                <NavLink to="/workshops" className={navClass}>
+                  Workshops
+                </NavLink>
                 {account.role === 'admin' && (
                   <NavLink to="/admin/users" className={navClass}>
                     Users

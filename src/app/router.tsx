@@ -92,6 +92,40 @@ export const router = createBrowserRouter([
             ),
           })),
       },
+      {
+        path: 'workshops',
+        lazy: () =>
+          import('../features/workshops/components/workshops-page.tsx').then(({ WorkshopsPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <WorkshopsPage />
+              </RequireAccount>
+            ),
+          })),
+      },
+      { path: 'workshops/join', lazy: () => import('../features/workshops/components/join-page.tsx').then((m) => ({ Component: m.JoinPage })) },
+      {
+        path: 'workshops/:id',
+        lazy: () =>
+          import('../features/workshops/components/workshop-page.tsx').then(({ WorkshopPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <WorkshopPage />
+              </RequireAccount>
+            ),
+          })),
+      },
+      {
+        path: 'workshops/:id/burns/:burnId',
+        lazy: () =>
+          import('../features/burns/components/burn-entry-page.tsx').then(({ BurnEntryPage }) => ({
+            Component: () => (
+              <RequireAccount>
+                <BurnEntryPage inWorkshop />
+              </RequireAccount>
+            ),
+          })),
+      },
       { path: 'shared/:token', lazy: () => import('../features/shared-design/components/shared-design-page.tsx').then((m) => ({ Component: m.SharedDesignPage })) },
       { path: 'design/print', lazy: () => import('../features/print/components/print-page.tsx').then((m) => ({ Component: m.PrintPage })) },
       { path: 'design', lazy: () => import('../features/designer/components/designer-page.tsx').then((m) => ({ Component: m.DesignerPage })) },

@@ -111,9 +111,10 @@ export function NewBurnPage() {
   );
 }
 
-/** /library/:id/burns/:burnId: one entry, its photos; change or delete it. */
-export function BurnEntryPage() {
-  const { id: designId = '', burnId = '' } = useParams();
+/** /library/:id/burns/:burnId (or /workshops/:id/burns/:burnId, `inWorkshop`): one entry, its photos; change or delete it. */
+export function BurnEntryPage({ inWorkshop = false }: { inWorkshop?: boolean }) {
+  const { id: parentId = '', burnId = '' } = useParams();
+  const parentPath = inWorkshop ? `/workshops/${encodeURIComponent(parentId)}` : `/library/${encodeURIComponent(parentId)}`;
   const [search] = useSearchParams();
   const navigate = useNavigate();
   const units = useBurnUnits();
@@ -122,8 +123,8 @@ export function BurnEntryPage() {
   const remove = useDeleteBurn();
   const [confirming, setConfirming] = useState(false);
   const back = (
-    <Link to={`/library/${encodeURIComponent(designId)}`} className="text-ember-700 underline">
-      Back to the design
+    <Link to={parentPath} className="text-ember-700 underline">
+      {inWorkshop ? 'Back to the workshop' : 'Back to the design'}
     </Link>
   );
 
@@ -167,7 +168,7 @@ export function BurnEntryPage() {
             <h2 className="font-semibold">Delete this entry</h2>
             {confirming ? (
               <div className="flex flex-wrap gap-2">
-                <Button variant="danger" disabled={remove.isPending} onClick={() => remove.mutate(burnId, { onSuccess: () => void navigate(`/library/${encodeURIComponent(designId)}`) })}>
+                <Button variant="danger" disabled={remove.isPending} onClick={() => remove.mutate(burnId, { onSuccess: () => void navigate(parentPath) })}>
                   Delete the entry and its {entry.photos.length} photo{entry.photos.length === 1 ? '' : 's'}
                 </Button>
                 <Button variant="secondary" onClick={() => setConfirming(false)}>
