@@ -158,6 +158,17 @@ function MemberView({ workshop }: { workshop: Workshop }) {
   );
 }
 
+/** "“sam@” must be an e-mail address", naming the pasted address a problem is about. */
+function invitationProblem(error: Error, list: string[]): string {
+  if (!(error instanceof ApiError) || error.fields.length === 0) return error.message;
+  return error.fields
+    .map((f) => {
+      const index = /^emails\.(\d+)$/.exec(f.path)?.[1];
+      return index !== undefined && list[Number(index)] !== undefined ? `“${list[Number(index)]}” ${f.message}` : f.message;
+    })
+    .join('; ');
+}
+
 function InstructorView({ workshop }: { workshop: Workshop }) {
   const burns = useWorkshopBurns(workshop.id);
   const update = useUpdateWorkshop();
@@ -167,6 +178,7 @@ function InstructorView({ workshop }: { workshop: Workshop }) {
   const del = useDeleteWorkshop();
   const navigate = useNavigate();
   const [emails, setEmails] = useState('');
+  const [sentList, setSentList] = useState<string[]>([]);
   const [confirmClose, setConfirmClose] = useState(false);
   const closed = workshop.closedAt !== null;
   const joinLink = workshop.code ? `${window.location.origin}/workshops/join?code=${workshop.code}` : null;
@@ -175,6 +187,7 @@ function InstructorView({ workshop }: { workshop: Workshop }) {
     event.preventDefault();
     const list = emails.split(/[\s,;]+/).map((e) => e.trim()).filter(Boolean);
     if (list.length === 0) return;
+    setSentList(list);
     invite.mutate({ id: workshop.id, input: { emails: list } }, { onSuccess: () => setEmails('') });
   }
 
@@ -261,7 +274,7 @@ function InstructorView({ workshop }: { workshop: Workshop }) {
             <Button type="submit" disabled={invite.isPending} className="self-start">
               {invite.isPending ? 'Sending…' : 'Send invitations'}
             </Button>
-            {invite.isError && <Notice tone="error">{invite.error.message}</Notice>}
+            {invite.isError && <Notice tone="error">{invitationProblem(invite.error, sentList)}</Notice>}
             {invite.data && (
               <Notice tone="success">
                 Invited {invite.data.invited.length}.{invite.data.alreadyMembers.length > 0 && ` Already in: ${invite.data.alreadyMembers.join(', ')}.`}
