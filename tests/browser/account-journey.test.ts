@@ -48,7 +48,9 @@ describe.skipIf(skip)('account journey in Chromium', () => {
     await page.getByLabel('Password').fill(user.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'Your account' }).waitFor();
-    expect(await page.textContent('main')).toContain(user.name);
+    // The name is shown in its own box, ready to change.
+    expect(await page.getByLabel('Name', { exact: true }).inputValue()).toBe(user.name);
+    await page.getByText('The burn log shows measurements in').waitFor();
     await page.screenshot({ path: artifactPath('account-page-1280.png'), fullPage: true });
   });
 

@@ -29,7 +29,7 @@ export function AccountPage() {
       )}
       <div className="grid gap-6 md:grid-cols-2">
         <ProfileForm account={account} />
-        <UnitsPreference current={account.units} />
+        <UnitsPreference current={account.units} account={account} />
         <PrintPreferences account={account} />
         <section aria-labelledby="printer-heading" className="rounded-lg border border-rule bg-white p-5">
           <h2 id="printer-heading" className="text-lg font-semibold">
