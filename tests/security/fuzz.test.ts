@@ -33,6 +33,11 @@ const validBodies: Record<string, () => Record<string, unknown>> = {
   'POST /api/account/delete': () => ({ password: 'not-the-fuzz-password' }),
   'PATCH /api/admin/users/:id': () => ({ role: 'instructor', disabled: false }),
   'POST /api/designs/:id/burns': () => ({ date: '2026-11-30T10:00:00Z', fuelKind: 'pellets', fuelMassG: 120, wind: 'light', windscreen: true, timeToJetsS: 140, flameRing: 4, smoke: 'some', notes: 'fuzz', version: 1 }),
+  'POST /api/workshops': () => ({ title: 'Fuzz session', designId: ids.kitDesignId, startsAt: '2026-12-10T18:30:00Z', version: 1, place: 'Hall', notes: 'fuzz', capacity: 12, defaultPaper: 'a4' }),
+  'PATCH /api/workshops/:id': () => ({ title: 'Fuzzed', place: 'Yard', capacity: 30, version: 1 }),
+  'POST /api/workshops/:id/invitations': () => ({ emails: ['fuzz-guest@workshop.example'] }),
+  'POST /api/workshops/join': () => ({ code: 'ABCD2345' }),
+  'POST /api/workshops/:id/burns': () => ({ date: '2026-12-10T20:00:00Z', timeToJetsS: 120, notes: 'fuzz' }),
   'PATCH /api/burns/:burnId': () => ({ notes: 'fuzzed', charG: 12, ambientC: 5, date: '2026-12-01T10:00:00+01:00' }),
   'POST /api/render/pdf': () => ({ design: design(), print: { paper: 'letter', orientation: 'portrait', marginMm: 8 }, printer: { measuredXMm: 150, measuredYMm: 200 }, version: '2' }),
   'POST /api/render/svg': () => ({ design: design(), print: { paper: 'a4' } }),
@@ -79,17 +84,20 @@ const bodyFor = (key: string) => {
 let server: TestServer;
 let owner: HttpClient;
 let admin: HttpClient;
-let ids: { designId: string; profileId: string; userId: string; burnId: string };
+let ids: { designId: string; profileId: string; userId: string; burnId: string; workshopId: string; kitDesignId: string };
 
 beforeAll(async () => {
   server = await startTestServer({ rateLimits: unlimited });
-  owner = await signedInClient(server, await createUser(server));
+  // An instructor: a maker who can also run workshops, so every route is reached.
+  owner = await signedInClient(server, await createUser(server, { role: 'instructor' }));
   admin = await signedInClient(server, await createUser(server, { role: 'admin' }));
   const bystander = await createUser(server);
   const created = await owner.post('/api/designs', { document: design() });
   const profile = await owner.post('/api/printer-profiles', { name: 'Laser', measuredXMm: 150, measuredYMm: 200 });
   const burn = await owner.post(`/api/designs/${created.body.id}/burns`, { date: '2026-11-30T10:00:00Z' });
-  ids = { designId: created.body.id, profileId: profile.body.id, userId: bystander.id, burnId: burn.body.id };
+  const kit = await owner.post('/api/designs', { document: design() });
+  const workshop = await owner.post('/api/workshops', { title: 'Fuzz night', designId: kit.body.id, startsAt: '2026-12-10T18:30:00Z' });
+  ids = { designId: created.body.id, profileId: profile.body.id, userId: bystander.id, burnId: burn.body.id, workshopId: workshop.body.id, kitDesignId: kit.body.id };
 });
 afterAll(() => server.close());
 
@@ -114,6 +122,7 @@ describe('fuzzed bodies on every JSON route', () => {
         .replace(/^\/api\/designs\/:id/, `/api/designs/${ids.designId}`)
         .replace(/^\/api\/printer-profiles\/:id/, `/api/printer-profiles/${ids.profileId}`)
         .replace(/^\/api\/admin\/users\/:id/, `/api/admin/users/${ids.userId}`)
+        .replace(/^\/api\/workshops\/:id/, `/api/workshops/${ids.workshopId}`)
         .replace(':burnId', ids.burnId)
         .replace(':number', '1');
       const http = route.path.startsWith('/api/admin') ? admin : owner;

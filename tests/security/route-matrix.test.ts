@@ -42,6 +42,11 @@ const bodies: Record<string, () => unknown> = {
   // Each actor acts on their own account here; a wrong password, so that none deletes theirs.
   'PATCH /api/account': () => ({ name: 'Taken over' }),
   'POST /api/account/delete': () => ({ password: 'not-the-owners-password' }),
+  'POST /api/workshops': () => ({ title: 'Taken over', designId: target.kitDesignId, startsAt: '2026-12-10T18:30:00Z' }),
+  'PATCH /api/workshops/:id': () => ({ title: 'Taken over', joinCode: 'new' }),
+  'POST /api/workshops/:id/invitations': () => ({ emails: ['taken-over@workshop.example'] }),
+  'POST /api/workshops/join': () => ({ code: 'ZZZZ9999' }),
+  'POST /api/workshops/:id/burns': () => ({ date: '2026-12-10T20:00:00Z', notes: 'taken over' }),
 };
 
 /** Routes that take a file rather than JSON: the request an owner's browser would send. */
@@ -64,12 +69,13 @@ let ownerEmail: string;
 let actors: Record<Actor, HttpClient>;
 /** The owner's resources the attempts aim at. */
 let target: Resources;
-type Resources = { designId: string; profileId: string; shareToken: string; burnId: string; photoId: string };
+type Resources = { designId: string; profileId: string; shareToken: string; burnId: string; photoId: string; kitDesignId: string; workshopId: string; workshopCode: string; memberId: string };
 
 beforeAll(async () => {
   photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#8b4513' } }).jpeg().toBuffer();
   server = await startTestServer();
-  const first = await createUser(server, { name: 'Owner Tamsin' });
+  // An instructor is a maker who also runs workshops: the owner has both kinds of resource.
+  const first = await createUser(server, { name: 'Owner Tamsin', role: 'instructor' });
   ownerId = first.id;
   ownerEmail = first.email;
   owner = await signedInClient(server, first);
@@ -98,7 +104,23 @@ async function createResources(http: HttpClient, profileId?: string): Promise<Re
   expect(burn.status).toBe(201);
   const picture = await http.upload(`/api/burns/${burn.body.id}/photos`, 'photo', photo, 'stove.jpg', 'image/jpeg');
   expect(picture.status).toBe(201);
-  return { designId: design.body.id, profileId: profile.body.id, shareToken: shared.body.shareToken, burnId: burn.body.id, photoId: picture.body.id };
+  // The workshop's kit is a design of its own: the first one stays deletable.
+  const kit = await http.post('/api/designs', { document: { ...document(), name: "Tamsin's secret stove" } });
+  const workshop = await http.post('/api/workshops', { title: "Tamsin's secret workshop", designId: kit.body.id, startsAt: '2026-12-10T18:30:00Z', capacity: 40 });
+  expect(workshop.status).toBe(201);
+  const member = await createUser(server);
+  expect((await (await signedInClient(server, member)).post('/api/workshops/join', { code: workshop.body.code })).status).toBe(201);
+  return {
+    designId: design.body.id,
+    profileId: profile.body.id,
+    shareToken: shared.body.shareToken,
+    burnId: burn.body.id,
+    photoId: picture.body.id,
+    kitDesignId: kit.body.id,
+    workshopId: workshop.body.id,
+    workshopCode: workshop.body.code,
+    memberId: member.id,
+  };
 }
 
 /** Everything of the owner's that could change: the library, every version, profiles, account and the user row. */
@@ -109,11 +131,14 @@ async function ownerSnapshot() {
   );
   const photoBytes = (await owner.bytes(`/api/photos/${target.photoId}`)).bytes.length;
   const [row] = await server.database.db.select().from(users).where(eq(users.id, ownerId));
-  return { designs, versions, photoBytes, profiles: (await owner.get('/api/printer-profiles')).body, account: (await owner.get('/api/account')).body, row };
+  const workshop = (await owner.get(`/api/workshops/${target.workshopId}`)).body;
+  return { designs, versions, photoBytes, workshop, profiles: (await owner.get('/api/printer-profiles')).body, account: (await owner.get('/api/account')).body, row };
 }
 
 const keyOf = (route: RouteEntry) => `${route.method} ${route.path}`;
 const isAdminRoute = (route: RouteEntry) => route.path.startsWith('/api/admin');
+/** Admins manage every workshop by design (tests/api/workshops.test.ts); everyone else is tried on them. */
+const isManagedByAdmins = (route: RouteEntry) => route.path.startsWith('/api/workshops/:id');
 const fill = (path: string, resources: Resources, userId: string) =>
   path
     .replace(':burnId', resources.burnId)
@@ -121,6 +146,8 @@ const fill = (path: string, resources: Resources, userId: string) =>
     .replace(/^\/api\/designs\/:id/, `/api/designs/${resources.designId}`)
     .replace(/^\/api\/printer-profiles\/:id/, `/api/printer-profiles/${resources.profileId}`)
     .replace(/^\/api\/admin\/users\/:id/, `/api/admin/users/${userId}`)
+    .replace(/^\/api\/workshops\/:id/, `/api/workshops/${resources.workshopId}`)
+    .replace(':userId', resources.memberId)
     .replace(':number', '1');
 
 describe('the route table', () => {
@@ -137,13 +164,13 @@ describe('the route table', () => {
 describe("every route, for everyone but the owner, against the owner's resources", () => {
   it('is refused (or shows nothing of the owner\'s), never a 5xx, and leaves the owner\'s data unchanged', async ({ task }) => {
     const before = await ownerSnapshot();
-    const secrets = [target.designId, target.profileId, target.shareToken, target.burnId, target.photoId, ownerEmail, "Tamsin's secret stove", "Tamsin's laser", "Tamsin's secret burn"];
+    const secrets = [target.designId, target.profileId, target.shareToken, target.burnId, target.photoId, target.kitDesignId, target.workshopId, target.workshopCode, ownerEmail, "Tamsin's secret stove", "Tamsin's laser", "Tamsin's secret burn", "Tamsin's secret workshop"];
     const routes = routeTable(server.app).filter((route) => !route.path.startsWith('/api/auth/') && !publicRoutes[keyOf(route)]);
     let attempts = 0;
     for (const route of routes) {
       for (const [actor, http] of Object.entries(actors) as [Actor, HttpClient][]) {
         // Admin routes are meant for admins (their own tests: roles); everyone else is tried.
-        if (actor === 'admin' && isAdminRoute(route)) continue;
+        if (actor === 'admin' && (isAdminRoute(route) || isManagedByAdmins(route))) continue;
         const response = await send(http, route, fill(route.path, target, ownerId));
         attempts++;
         const label = `${actor}: ${keyOf(route)} -> ${response.status} ${JSON.stringify(response.body ?? null).slice(0, 200)}`;
@@ -154,7 +181,7 @@ describe("every route, for everyone but the owner, against the owner's resources
       }
     }
     expect(await ownerSnapshot()).toEqual(before);
-    recordCount(task, 'routes x actors', `${routes.length} routes x 4 actors (admin not on admin routes): ${attempts} attempts`);
+    recordCount(task, 'routes x actors', `${routes.length} routes x 4 actors (admin not on admin or workshop routes): ${attempts} attempts`);
   });
 
   it("better-auth's admin endpoints refuse everyone but an admin, and change nothing", async ({ task }) => {
