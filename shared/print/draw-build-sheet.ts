@@ -4,36 +4,46 @@ import { strokes, type } from './draw-style.ts';
 
 /** Draws the build sheet's words down a page, after the template sheets, through the same interface. */
 export function drawBuildSheet(ctx: DrawingContext, content: BuildSheetContent, page: { widthMm: number; marginMm: number }): void {
-  const left = page.marginMm;
-  const width = page.widthMm - 2 * page.marginMm;
-  let y = page.marginMm + 6;
-  const line = (words: string, style: TextStyle = type.label, indent = 0, gap = 4.6) => {
-    for (const part of wrapText(words, width - indent, style.sizeMm)) {
-      ctx.text(left + indent, y, part, style);
-      y += gap;
-    }
-  };
-  const heading = (words: string) => {
-    y += 2;
-    line(words, { ...type.title, sizeMm: 4 }, 0, 6);
-  };
+  const write = pageWriter(ctx, page);
+  write.line(content.title, { ...type.title, sizeMm: 5.2 }, 0, 8);
+  write.heading('Materials');
+  for (const m of content.materials) write.line(`• ${m.part}: ${m.text}`);
 
-  line(content.title, { ...type.title, sizeMm: 5.2 }, 0, 8);
-  heading('Materials');
-  for (const m of content.materials) line(`• ${m.part}: ${m.text}`);
-
-  heading('Holes');
+  write.heading('Holes');
   for (const part of content.holes) {
-    line(part.part, { ...type.label, weight: 'bold' });
-    for (const g of part.groups) line(`• ${g.label}: ${g.count} × ${g.drill}${g.pilot ? `, pilot ${g.pilot}` : ''}`, type.label, 3);
+    write.line(part.part, { ...type.label, weight: 'bold' });
+    for (const g of part.groups) write.line(`• ${g.label}: ${g.count} × ${g.drill}${g.pilot ? `, pilot ${g.pilot}` : ''}`, type.label, 3);
   }
 
-  heading('Order of work');
-  content.orderOfWork.forEach((step, i) => line(`${i + 1}. ${step}`));
+  write.heading('Order of work');
+  content.orderOfWork.forEach((step, i) => write.line(`${i + 1}. ${step}`));
 
-  heading('Safety');
-  for (const note of content.safety) line(`• ${note}`);
-  ctx.line(left, y, left + width, y, strokes.frame);
+  write.heading('Safety');
+  for (const note of content.safety) write.line(`• ${note}`);
+  write.rule();
+}
+
+/** Writes wrapped lines and headings down a page from the top margin; `y` is where the next line goes. */
+export function pageWriter(ctx: DrawingContext, page: { widthMm: number; marginMm: number }) {
+  const left = page.marginMm;
+  const width = page.widthMm - 2 * page.marginMm;
+  const state = {
+    y: page.marginMm + 6,
+    line(words: string, style: TextStyle = type.label, indent = 0, gap = 4.6) {
+      for (const part of wrapText(words, width - indent, style.sizeMm)) {
+        ctx.text(left + indent, state.y, part, style);
+        state.y += gap;
+      }
+    },
+    heading(words: string) {
+      state.y += 2;
+      state.line(words, { ...type.title, sizeMm: 4 }, 0, 6);
+    },
+    rule() {
+      ctx.line(left, state.y, left + width, state.y, strokes.frame);
+    },
+  };
+  return state;
 }
 
 /** Splits text at spaces into lines that fit a width (at about 0.55 em a character). */
