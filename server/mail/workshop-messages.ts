@@ -1,6 +1,7 @@
 import type { OutgoingMail } from './mailer.ts';
 
-const when = (date: Date) => date.toLocaleString('en-GB', { dateStyle: 'full', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
+/** A workshop's time in words, in UTC (the server does not know the reader's zone). */
+export const when = (date: Date) => date.toLocaleString('en-GB', { dateStyle: 'full', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
 
 /** An invitation to a workshop: one link, for this address only. */
 export function workshopInvitationMail(to: string, w: { title: string; instructor: string; startsAt: Date; place: string; link: string; days: number }): OutgoingMail {

@@ -3,7 +3,9 @@ import type { Design } from '../../shared/design/index.ts';
 import { validateDesign } from '../../shared/design/index.ts';
 import type { DrawingContext } from '../../shared/drawing/drawing-context.ts';
 import { formatHoleCsv, layoutDesign, type Layout } from '../../shared/layout/index.ts';
+import { classPackContent, drawClassPackCover, drawClassPackSignOff, signOffRows, type ClassPackMeta } from '../../shared/print/class-pack.ts';
 import { drawCalibrationSheet } from '../../shared/print/draw-calibration.ts';
+import { kitText } from '../../shared/print/kit-text.ts';
 import { paperSizes, printOptionsSchema, sheetSize, type PrintOptions } from '../../shared/print/index.ts';
 import { planPrintableKit, type KitPlan } from '../../shared/print/plan-kit.ts';
 import { printerScale } from '../../shared/print/printer-profile.ts';
@@ -49,6 +51,29 @@ export async function renderKitPdf(input: RenderRequest, today?: Date): Promise<
   const page = sheetSize(paperSizes[print.paper], 'portrait');
   plan.drawBuildSheet(pdf.addSheet(page.widthMm, page.heightMm), { widthMm: page.widthMm, marginMm: print.marginMm });
   return { bytes: await pdf.save(), sheets: plan.imposition.sheets.length, fileName: `${fileStem(design.name)}-kit.pdf` };
+}
+
+/**
+ * The instructor's class pack: a cover with the materials and tools for the group's builds, the
+ * safety briefing with a sign-off line per person, then one kit (its sheets and build sheet).
+ */
+export async function renderClassPackPdf(input: RenderRequest, meta: ClassPackMeta, today?: Date): Promise<{ bytes: Uint8Array; pages: number; fileName: string }> {
+  const { design, layout, plan, print } = prepareKit(input, today);
+  const content = classPackContent(design, layout, plan.info.pilots, kitText(design.units), meta);
+  const pdf = await createPdfDocument({ title: content.title, subject: 'Canwright class pack', creationDate: today });
+  const page = sheetSize(paperSizes[print.paper], 'portrait');
+  drawClassPackCover(pdf.addSheet(page.widthMm, page.heightMm), content, { widthMm: page.widthMm, marginMm: print.marginMm });
+  // The sign-off list runs on over as many pages as the roster needs (a continuation page always fits rows).
+  const rows = signOffRows(content).length;
+  let signOffPages = 0;
+  for (let row = 0; signOffPages === 0 || row < rows; signOffPages++) {
+    const next = drawClassPackSignOff(pdf.addSheet(page.widthMm, page.heightMm), content, { widthMm: page.widthMm, heightMm: page.heightMm, marginMm: print.marginMm }, row);
+    if (next === row && signOffPages > 0) throw new Error('A sign-off page fitted no row');
+    row = next;
+  }
+  plan.imposition.sheets.forEach((sheet, i) => plan.drawSheet(i, pdf.addSheet(sheet.widthMm, sheet.heightMm, plan.transform)));
+  plan.drawBuildSheet(pdf.addSheet(page.widthMm, page.heightMm), { widthMm: page.widthMm, marginMm: print.marginMm });
+  return { bytes: await pdf.save(), pages: 1 + signOffPages + plan.imposition.sheets.length + 1, fileName: `${fileStem(meta.title)}-class-pack.pdf` };
 }
 
 /** One SVG file per sheet. */

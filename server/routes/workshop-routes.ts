@@ -2,13 +2,14 @@ import { Router, type Response } from 'express';
 import { z } from 'zod';
 import { paperPreferenceSchema } from '../../shared/account/preferences.ts';
 import { createBurnInputSchema } from '../../shared/burns/burn-schema.ts';
-import { createWorkshopInputSchema, invitationsInputSchema, joinWorkshopInputSchema, updateWorkshopInputSchema } from '../../shared/workshops/workshop-schema.ts';
+import { WORKSHOP_CAPACITY_MAX, createWorkshopInputSchema, invitationsInputSchema, joinWorkshopInputSchema, updateWorkshopInputSchema } from '../../shared/workshops/workshop-schema.ts';
 import { currentUser, requireRole, requireUser } from '../http/session.ts';
 import { parseInput } from '../http/validate.ts';
 import { busy, type RenderPool } from '../render/render-pool.ts';
 import type { WorkshopUseCases } from '../workshops/workshop-use-cases.ts';
 
 const kitQuerySchema = z.object({ paper: paperPreferenceSchema.optional() });
+const classPackQuerySchema = kitQuerySchema.extend({ builds: z.coerce.number().int().min(1).max(WORKSHOP_CAPACITY_MAX).optional() });
 /** A member's burn: the version is the kit's, never chosen. */
 const workshopBurnInputSchema = createBurnInputSchema.omit({ version: true });
 
@@ -61,6 +62,13 @@ export function workshopRoutes(workshops: WorkshopUseCases, pool: RenderPool): R
     const { paper } = parseInput(kitQuerySchema, req.query);
     const result = await workshops.kitPdf(viewer(res), req.params.id as string, paper, abandonedWith(res));
     res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Sheet-Count': String(result.sheets), 'Cache-Control': 'private, no-store' });
+    res.end(Buffer.from(result.bytes));
+  });
+  router.get('/:id/class-pack.pdf', requireUser, async (req, res) => {
+    if (pool.full) throw busy();
+    const query = parseInput(classPackQuerySchema, req.query);
+    const result = await workshops.classPack(viewer(res), req.params.id as string, query, abandonedWith(res));
+    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Page-Count': String(result.pages), 'Cache-Control': 'private, no-store' });
     res.end(Buffer.from(result.bytes));
   });
   router.post('/:id/send-kit', requireUser, async (req, res) => {

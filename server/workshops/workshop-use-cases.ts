@@ -18,7 +18,7 @@ import type { BurnRepository } from '../burns/burn-repository.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import type { SessionUser } from '../http/session.ts';
 import type { Mailer } from '../mail/mailer.ts';
-import { kitMail, workshopInvitationMail } from '../mail/workshop-messages.ts';
+import { kitMail, when, workshopInvitationMail } from '../mail/workshop-messages.ts';
 import type { RenderPool } from '../render/render-pool.ts';
 import type { WorkshopRepository, WorkshopWithKit } from './workshop-repository.ts';
 
@@ -276,6 +276,30 @@ export function createWorkshopUseCases({ workshops, burnLog, mailer, renderPool,
         await mailer.send(kitMail(member.email, { name: member.name, title: row.workshop.title, instructor: row.instructorName, link: `${publicUrl}/workshops/${id}`, fileName: pdf.fileName, pdf: Buffer.from(pdf.bytes) }));
       }
       return { sent: members.length };
+    },
+
+    /**
+     * The instructor's class pack on their own paper: materials for the group's builds (the members
+     * and open invitations, or the places when nobody is invited yet, unless a number is asked for),
+     * the sign-off list of the roster, then the kit.
+     */
+    async classPack(viewer: SessionUser, id: string, options: { paper?: string; builds?: number }, signal?: AbortSignal) {
+      const row = await manage(viewer, id, { open: false });
+      const people = (await roster(row)).filter((r) => r.status !== 'expired').map((r) => r.name || r.email);
+      const builds = options.builds ?? (people.length || row.workshop.capacity);
+      const names = [...people, ...Array.from({ length: Math.max(0, builds - people.length) }, () => '')];
+      const person = await workshops.userEmail(viewer.id);
+      const printer = await workshops.printerOf(viewer.id);
+      const result = await renderPool.run(
+        {
+          kind: 'class-pack',
+          request: { design: row.document, print: { paper: (options.paper ?? person?.defaultPaper ?? row.workshop.defaultPaper) as 'letter' }, printer, version: String(row.version) },
+          meta: { title: row.workshop.title, when: when(row.workshop.startsAt), place: row.workshop.place, instructor: row.instructorName, builds, names },
+        },
+        signal,
+      );
+      if (result.kind !== 'class-pack') throw new Error('The render pool answered something other than a class pack');
+      return result;
     },
 
     async burns(viewer: SessionUser, id: string): Promise<WorkshopBurns> {
