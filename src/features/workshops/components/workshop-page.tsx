@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import type { BurnFields } from '../../../../shared/burns/burn-schema.ts';
-import type { Workshop } from '../../../../shared/workshops/workshop-schema.ts';
+import { WORKSHOP_CAPACITY_MAX, type Workshop } from '../../../../shared/workshops/workshop-schema.ts';
 import { Button } from '../../../components/button.tsx';
 import { Notice } from '../../../components/notice.tsx';
 import { Page } from '../../../components/page.tsx';
@@ -87,7 +87,48 @@ function KitPanel({ workshop }: { workshop: Workshop }) {
       <p className="text-sm text-ink-soft">
         Scaled for your own printer profile (<Link to="/printer" className="underline">calibrate a printer</Link>). Print at 100 %, then check the calibration ruler with a real ruler before you cut.
       </p>
+      {workshop.role === 'instructor' && <ClassPack workshop={workshop} paper={paper} />}
     </section>
+  );
+}
+
+/** The instructor's class pack: materials and tools for the group, the briefing with a sign-off list, one kit. */
+function ClassPack({ workshop, paper }: { workshop: Workshop; paper: string }) {
+  const expected = workshop.roster?.filter((r) => r.status !== 'expired').length || workshop.capacity;
+  const [builds, setBuilds] = useState(String(expected));
+  const count = Number(builds);
+  const valid = Number.isInteger(count) && count >= 1 && count <= WORKSHOP_CAPACITY_MAX;
+  const href = `/api/workshops/${encodeURIComponent(workshop.id)}/class-pack.pdf?paper=${paper}${valid ? `&builds=${count}` : ''}`;
+  return (
+    <div className="flex flex-col gap-2 border-t border-rule pt-3">
+      <h3 className="text-sm font-semibold">Class pack</h3>
+      <p className="text-sm text-ink-soft">A cover with the cans, drills and pilot sizes for the whole group, the safety briefing with a line for each person to sign, then one kit.</p>
+      <div className="flex flex-wrap items-end gap-2">
+        <label className="flex flex-col gap-1 text-sm font-medium">
+          Stoves to build
+          <input
+            type="number"
+            inputMode="numeric"
+            min={1}
+            max={WORKSHOP_CAPACITY_MAX}
+            value={builds}
+            onChange={(e) => setBuilds(e.target.value)}
+            aria-invalid={!valid}
+            aria-describedby={valid ? undefined : 'builds-problem'}
+            className="min-h-11 w-28 rounded-md border border-rule bg-white px-3 py-2 text-base font-normal"
+          />
+        </label>
+        {valid ? (
+          <a href={href} className="inline-flex min-h-11 items-center rounded-md border border-ember-600 px-4 text-sm font-medium text-ember-700 hover:bg-ember-50">
+            Download the class pack (PDF)
+          </a>
+        ) : (
+          <p id="builds-problem" role="alert" className="text-sm text-danger">
+            Give a whole number of stoves from 1 to {WORKSHOP_CAPACITY_MAX}.
+          </p>
+        )}
+      </div>
+    </div>
   );
 }
 
