@@ -114,6 +114,21 @@ describe('a workshop from start to the group results', () => {
     expect(doc.getPageCount()).toBeGreaterThanOrEqual(2);
   });
 
+  it('prints the class pack: cover and sign-off for the roster, then the kit', async () => {
+    const kit = await instructor.bytes(`/api/workshops/${workshopId}/kit.pdf?paper=letter`);
+    const pack = await instructor.bytes(`/api/workshops/${workshopId}/class-pack.pdf?paper=letter`);
+    expect(pack.status).toBe(200);
+    expect(pack.headers.get('content-type')).toBe('application/pdf');
+    const sheets = Number(kit.headers.get('x-sheet-count'));
+    // Cover + one sign-off page (two roster lines) + the kit's sheets + its build sheet.
+    expect((await PDFDocument.load(pack.bytes)).getPageCount()).toBe(sheets + 3);
+    expect(Number(pack.headers.get('x-page-count'))).toBe(sheets + 3);
+    expect((await member.get(`/api/workshops/${workshopId}/class-pack.pdf`)).status).toBe(403);
+    const refused = await instructor.get(`/api/workshops/${workshopId}/class-pack.pdf?builds=0`);
+    expect(refused.status).toBe(400);
+    expect(JSON.stringify(refused.body)).not.toMatch(/too_small|Number must/);
+  });
+
   it('moving the kit to a newer version tells the members', async () => {
     const moved = await instructor.patch(`/api/workshops/${workshopId}`, { version: 2 });
     expect(moved.status).toBe(200);
@@ -163,6 +178,7 @@ describe('who may do what', () => {
       ['POST', `/api/workshops/${workshopId}/invitations`, { emails: ['a@b.example'] }],
       ['DELETE', `/api/workshops/${workshopId}/members/${userB.id}`],
       ['GET', `/api/workshops/${workshopId}/kit.pdf`],
+      ['GET', `/api/workshops/${workshopId}/class-pack.pdf`],
       ['POST', `/api/workshops/${workshopId}/send-kit`, {}],
       ['GET', `/api/workshops/${workshopId}/burns`],
       ['POST', `/api/workshops/${workshopId}/burns`, { date: '2026-12-20T12:00:00Z' }],
