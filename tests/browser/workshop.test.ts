@@ -108,6 +108,19 @@ describe.skipIf(skip)('an instructor runs a workshop and a member takes part, in
     expect(await seriousViolations(teacher)).toEqual([]);
   });
 
+  it('the instructor downloads a class pack for the stoves asked for; a number out of range is explained', async () => {
+    const stoves = teacher.getByLabel('Stoves to build');
+    await stoves.fill('0');
+    await teacher.getByText('Give a whole number of stoves from 1 to 200.').waitFor();
+    expect(await teacher.getByRole('link', { name: 'Download the class pack (PDF)' }).count()).toBe(0);
+    await stoves.fill('6');
+    const [pack] = await Promise.all([teacher.waitForEvent('download'), teacher.getByRole('link', { name: 'Download the class pack (PDF)' }).click()]);
+    expect(pack.suggestedFilename()).toMatch(/-class-pack\.pdf$/);
+    const bytes = readFileSync((await pack.path())!);
+    expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(await seriousViolations(teacher)).toEqual([]);
+  });
+
   it('the instructor sends the kit, and a removed member loses the workshop at once', async () => {
     const before = server.mail.list()[0]?.id ?? 0;
     await teacher.getByRole('button', { name: 'Send the kit to 1 member' }).click();
