@@ -106,6 +106,12 @@ export const partSchema = z.object({
   endPatterns: z.array(endPatternSchema).max(MAX_END_PATTERNS).default([]),
   /** Concentrator only: diameter of the opening the flame passes through. */
   openingDiameterMm: z.number().positive().max(600).optional(),
+  /**
+   * Where this can's bottom stands, measured up from the bottom of the shell; empty for where such
+   * a part usually sits (shared/layout/assembly.ts: a chamber's top level with the shell's top, a
+   * concentrator and a pot stand each on what is below).
+   */
+  bottomAtMm: z.number().min(0).max(1000).optional(),
 });
 export type Part = z.infer<typeof partSchema>;
 export type PartInput = z.input<typeof partSchema>;
@@ -124,6 +130,23 @@ export const rulesSchema = z.object({
   topMarginMm: z.number().min(0).max(50).default(6),
   chimeMarginMm: z.number().min(0).max(50).default(6),
   rimMarginMm: z.number().min(0).max(50).default(3),
+  /** Across parts (shared/layout/checks/check-assembly.ts), all common practice, no source: */
+  /** the gap round the chamber, 3 mm to 25 mm (1 in), */
+  minGapMm: z.number().min(0).max(100).default(3),
+  maxGapMm: z.number().positive().max(300).default(25),
+  /** room under the chamber for primary air to reach its bottom holes, */
+  minClearanceBelowMm: z.number().min(0).max(200).default(6),
+  /** the jets' top edge this far below the shell's top, where it closes against the chamber, */
+  jetsBelowShellTopMm: z.number().min(0).max(100).default(3),
+  /** the shell's intake at least as open as the primary and secondary holes it feeds, */
+  minIntakeRatio: z.number().min(0).max(10).default(1),
+  /** a concentrator opening 0.5 to 0.7 of the chamber's diameter, */
+  concentratorMinRatio: z.number().min(0.05).max(1).default(0.5),
+  concentratorMaxRatio: z.number().min(0.05).max(1).default(0.7),
+  /** 25 mm (1 in) of flame between the stove's top and the pot, */
+  minFlameRoomMm: z.number().min(0).max(300).default(25),
+  /** and a pot stand's openings at least as large as the opening the flame comes out of. */
+  minExhaustRatio: z.number().min(0).max(10).default(1),
 });
 export type Rules = z.infer<typeof rulesSchema>;
 

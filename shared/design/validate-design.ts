@@ -91,5 +91,7 @@ function findCrossFieldProblems(design: Design): DesignProblem[] {
   if (design.rules.jetPitchErrorMm < design.rules.jetPitchWarnMm) {
     problems.push({ path: 'rules.jetPitchErrorMm', message: 'must not be below the warning limit' });
   }
+  if (design.rules.maxGapMm < design.rules.minGapMm) problems.push({ path: 'rules.maxGapMm', message: 'must not be below the narrowest gap allowed' });
+  if (design.rules.concentratorMaxRatio < design.rules.concentratorMinRatio) problems.push({ path: 'rules.concentratorMaxRatio', message: 'must not be below the smallest opening allowed' });
   return problems;
 }

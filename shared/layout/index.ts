@@ -7,3 +7,4 @@ export { planRings, placeEndPattern } from './end-pattern.ts';
 export { solveJetCount, type JetCountAnswer } from './solve-jets.ts';
 export { placeNextRing, placeNextRowHeight } from './place-next.ts';
 export { describePosition, describeRowPositions } from './describe-row.ts';
+export { assemble, type Assembly, type PlacedPart } from './assembly.ts';

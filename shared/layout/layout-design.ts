@@ -7,13 +7,18 @@ import type { Check, CheckContext } from './checks/check-context.ts';
 import { checkDrillSet } from './checks/check-drill-set.ts';
 import { checkEdges } from './checks/check-edges.ts';
 import { checkJetPitch } from './checks/check-jet-pitch.ts';
-import { checkConcentrator, checkDroppedHoles } from './checks/check-notes.ts';
+import { checkDroppedHoles } from './checks/check-notes.ts';
+import { checkFit } from './checks/check-fit.ts';
+import { checkHeights } from './checks/check-heights.ts';
+import { checkIntakeArea } from './checks/check-intake-area.ts';
+import { checkTopParts } from './checks/check-top-parts.ts';
+import { assemble } from './assembly.ts';
 import { checkSpacing } from './checks/check-spacing.ts';
 import { createDrillLookup } from './drill-lookup.ts';
 import { countEndPatternHoles } from './end-pattern.ts';
 import type { Finding, Hole, Layout, Severity } from './layout-types.ts';
 
-const checks: Check[] = [checkSpacing, checkEdges, checkJetPitch, checkDrillSet, checkDroppedHoles, checkConcentrator];
+const checks: Check[] = [checkSpacing, checkEdges, checkJetPitch, checkDrillSet, checkDroppedHoles, checkFit, checkHeights, checkIntakeArea, checkTopParts];
 const severityOrder: Record<Severity, number> = { error: 0, warning: 1, note: 2 };
 
 /** Lays out a valid design: pieces, holes and marks in mm, group totals, airflow and findings. */
@@ -22,7 +27,8 @@ export function layoutDesign(design: Design): Layout {
   if (requested > MAX_HOLES) return tooManyHoles(design, requested);
 
   const drills = createDrillLookup();
-  const layout: Layout = { designName: design.name, pieces: [], holes: [], marks: [], groups: [], airflow: summarizeAirflow([], design.airflow.targetRatio), findings: [] };
+  const assembly = assemble(design);
+  const layout: Layout = { designName: design.name, pieces: [], holes: [], marks: [], groups: [], airflow: summarizeAirflow([], design.airflow.targetRatio), findings: [], assembly: assembly.parts };
   const dropped = new Map<string, number>();
   for (const part of design.parts) {
     const placed = buildPart(part, design, drills);
@@ -38,7 +44,7 @@ export function layoutDesign(design: Design): Layout {
     if (list) list.push(hole);
     else holesByPiece.set(hole.pieceId, [hole]);
   }
-  const context: CheckContext = { design, pieces: layout.pieces, holesByPiece, dropped };
+  const context: CheckContext = { design, pieces: layout.pieces, holesByPiece, dropped, assembly };
   layout.groups = totalGroups(layout.holes);
   layout.airflow = summarizeAirflow(layout.groups, design.airflow.targetRatio);
   const findings: Finding[] = checks.flatMap((check) => check(context));
@@ -82,5 +88,6 @@ function tooManyHoles(design: Design, requested: number): Layout {
         holeIds: [],
       },
     ],
+    assembly: assemble(design).parts,
   };
 }

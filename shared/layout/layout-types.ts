@@ -1,4 +1,5 @@
 import type { HoleGroup, PartRole } from '../design/design-schema.ts';
+import type { PlacedPart } from './assembly.ts';
 
 /**
  * The result of laying out a design: plain data in millimetres. The preview, the PDF and the
@@ -88,6 +89,8 @@ export interface Finding {
   numbers: Record<string, number>;
   holeIds: string[];
   pieceId?: string;
+  /** The parts a finding across parts is about (the fit of a chamber in its shell names both). */
+  partIds?: string[];
 }
 
 export interface GroupTotal {
@@ -113,4 +116,6 @@ export interface Layout {
   groups: GroupTotal[];
   airflow: AirflowSummary;
   findings: Finding[];
+  /** Where each part stands in the put-together stove (shared/layout/assembly.ts). */
+  assembly: PlacedPart[];
 }

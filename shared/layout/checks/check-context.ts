@@ -1,4 +1,5 @@
 import type { Design } from '../../design/design-schema.ts';
+import type { Assembly } from '../assembly.ts';
 import type { Finding, Hole, Piece } from '../layout-types.ts';
 
 export interface CheckContext {
@@ -7,6 +8,8 @@ export interface CheckContext {
   holesByPiece: Map<string, Hole[]>;
   /** Side-row positions dropped in keep-outs, by "partId/rowId". */
   dropped: Map<string, number>;
+  /** Where each part stands in the put-together stove. */
+  assembly: Assembly;
 }
 
 export type Check = (context: CheckContext) => Finding[];
@@ -30,3 +33,13 @@ export class FindingGroups {
 }
 
 export const mm = (value: number) => Math.round(value * 100) / 100;
+
+/** Every hole of one part, on any of its pieces. */
+export function holesOfPart(context: Pick<CheckContext, 'pieces' | 'holesByPiece'>, partId: string): Hole[] {
+  return context.pieces.filter((p) => p.partId === partId).flatMap((p) => context.holesByPiece.get(p.id) ?? []);
+}
+
+/** Holes on a part's wall strips only (their yMm is up from the can's bottom). */
+export function wallHolesOfPart(context: Pick<CheckContext, 'pieces' | 'holesByPiece'>, partId: string): Hole[] {
+  return context.pieces.filter((p) => p.partId === partId && p.kind === 'wrap-strip').flatMap((p) => context.holesByPiece.get(p.id) ?? []);
+}

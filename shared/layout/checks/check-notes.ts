@@ -21,25 +21,3 @@ export const checkDroppedHoles: Check = ({ design, dropped }) => {
   }
   return findings;
 };
-
-/**
- * A flame concentrator's opening against the burn chamber's diameter: about 0.6 D is commonplace
- * (Aprovecho Research Center newsletter); far from it, a warning.
- */
-export const checkConcentrator: Check = ({ design }) => {
-  const chamber = design.parts.find((part) => part.role === 'burn-chamber');
-  const findings: Finding[] = [];
-  for (const part of design.parts) {
-    if (part.role !== 'concentrator' || part.openingDiameterMm === undefined || !chamber) continue;
-    const ratio = part.openingDiameterMm / chamber.vessel.outerDiameterMm;
-    const usual = ratio >= 0.5 && ratio <= 0.7;
-    findings.push({
-      rule: 'concentrator-opening',
-      severity: usual ? 'note' : 'warning',
-      message: `The concentrator opening is ${Math.round(ratio * 100) / 100} of the chamber diameter; about 0.6 is commonplace${usual ? '.' : ': a much smaller opening chokes the flame, a much larger one does little.'}`,
-      numbers: { ratio: Math.round(ratio * 1000) / 1000, openingMm: part.openingDiameterMm, chamberMm: chamber.vessel.outerDiameterMm },
-      holeIds: [],
-    });
-  }
-  return findings;
-};
