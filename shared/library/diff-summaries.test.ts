@@ -8,11 +8,11 @@ import { summarizeDesign } from './summarize-design.ts';
 /** The pint-can stove as its notes describe it: 16 jets of 3/16 in, 45 primary holes of 1/4 in. */
 function buildSummary(overrides: Partial<DesignSummary> = {}): DesignSummary {
   return {
-    holes: 68,
+    holes: 75,
     bySize: [
       { group: 'primary', drillLabel: '1/4 in', count: 45 },
       { group: 'secondary', drillLabel: '3/16 in', count: 16 },
-      { group: 'intake', drillLabel: '3/8 in', count: 7 },
+      { group: 'intake', drillLabel: '1/2 in', count: 14 },
     ],
     parts: [
       { id: 'chamber', role: 'burn-chamber', vesselName: 'No. 303 food can (303x406)', canCode: '303x406' },
@@ -27,8 +27,8 @@ describe('summarizeDesign', () => {
   it('counts the pint-can stove the way its notes describe it', () => {
     const summary = summarizeDesign(designSchema.parse(pintCanStove));
     // templates/pint-can-stove.json notes: 16 jets of 3/16 in; 16 low + 1 + 4 + 8 + 16 = 45 primary of 1/4 in;
-    // worked arithmetic: the intake row is 8 positions with position 0 skipped, so 7; 45 + 16 + 7 = 68.
-    expect(summary.holes).toBe(68);
+    // worked arithmetic: the intake row is 15 positions with position 0 skipped, so 14; 45 + 16 + 14 = 75.
+    expect(summary.holes).toBe(75);
     expect(summary.bySize).toEqual(buildSummary().bySize);
     // CMI can codes: 303 = 3 3/16 in across, 406 = 4 6/16 in tall, as the catalogue names them.
     expect(summary.parts.map((part) => part.canCode)).toEqual(['303x406', '401x411']);
@@ -47,7 +47,7 @@ describe('diffSummaries', () => {
       bySize: [
         { group: 'primary', drillLabel: '1/4 in', count: 45 },
         { group: 'secondary', drillLabel: '3/16 in', count: 20 },
-        { group: 'intake', drillLabel: '3/8 in', count: 7 },
+        { group: 'intake', drillLabel: '1/2 in', count: 14 },
       ],
     });
     // Worked arithmetic: 2.8125 / (20 x (3/16)^2) = 2.8125 / 0.703125 = 4.0.
@@ -60,7 +60,7 @@ describe('diffSummaries', () => {
       bySize: [
         { group: 'primary', drillLabel: '1/4 in', count: 45 },
         { group: 'secondary', drillLabel: '7/32 in', count: 16 },
-        { group: 'intake', drillLabel: '3/8 in', count: 7 },
+        { group: 'intake', drillLabel: '1/2 in', count: 14 },
       ],
     });
     expect(diffSummaries(buildSummary(), newer)).toEqual(['jets: 16 -> 0 holes of 3/16 in', 'jets: 0 -> 16 holes of 7/32 in']);

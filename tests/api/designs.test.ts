@@ -74,8 +74,8 @@ describe('/api/designs', () => {
       currentVersion: 1,
       shared: false,
       lastPrintedAt: null,
-      // Template notes: 16 jets + 45 primary; worked arithmetic: 8 intake positions less the skipped one = 7; 16 + 45 + 7 = 68.
-      holeCount: 68,
+      // Template notes: 16 jets + 45 primary; worked arithmetic: 15 intake positions less the skipped one = 14; 16 + 45 + 14 = 75.
+      holeCount: 75,
       parts: 2,
     });
     expect(created.shareUrlPath).toBeUndefined();
@@ -142,8 +142,8 @@ describe('/api/designs', () => {
 
     const saved = await http.post(`${base}/${id}/versions`, { document: withJets(20), note: 'More jets' });
     expect(saved.status).toBe(201);
-    // Worked arithmetic: 68 holes with 4 more jets = 72.
-    expect(saved.body).toMatchObject({ currentVersion: 2, holeCount: 72 });
+    // Worked arithmetic: 75 holes with 4 more jets = 79.
+    expect(saved.body).toMatchObject({ currentVersion: 2, holeCount: 79 });
     expect(saved.body.document.parts[0].sideRows[0].count).toBe(20);
 
     const versions = (await http.get(`${base}/${id}/versions`)).body.versions;
@@ -159,7 +159,7 @@ describe('/api/designs', () => {
 
     const restored = await http.post(`${base}/${id}/versions/1/restore`);
     expect(restored.status).toBe(201);
-    expect(restored.body).toMatchObject({ currentVersion: 3, holeCount: 68 });
+    expect(restored.body).toMatchObject({ currentVersion: 3, holeCount: 75 });
     const first = (await http.get(`${base}/${id}/versions/1`)).body;
     expect(restored.body.document).toEqual(first.document);
     expect((await http.get(`${base}/${id}`)).body.document).toEqual(first.document);
@@ -185,7 +185,7 @@ describe('/api/designs', () => {
 
     const copy = await http.post(`${base}/${source.id}/duplicate`);
     expect(copy.status).toBe(201);
-    expect(copy.body).toMatchObject({ name: 'Pint stove (copy)', tags: ['pint'], currentVersion: 1, shared: false, holeCount: 72 });
+    expect(copy.body).toMatchObject({ name: 'Pint stove (copy)', tags: ['pint'], currentVersion: 1, shared: false, holeCount: 79 });
     expect(copy.body.id).not.toBe(source.id);
     expect(copy.body.document).toEqual((await http.get(`${base}/${source.id}`)).body.document);
     const versions = (await http.get(`${base}/${copy.body.id}/versions`)).body.versions;

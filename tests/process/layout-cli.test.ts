@@ -12,7 +12,7 @@ describe('npm run layout (CLI)', () => {
     expect(run.status).toBe(0);
     const lines = run.stdout.trimEnd().split('\r\n');
     expect(lines[0]).toBe('piece,group,index,x_mm,y_mm,diameter_mm,drill');
-    expect(lines).toHaveLength(69); // 16 jets + 16 low row + 29 bottom + 7 intake, and the header
+    expect(lines).toHaveLength(76); // 16 jets + 16 low row + 29 bottom + 14 intake, and the header
   });
 
   it('prints the whole layout as JSON', () => {
