@@ -128,9 +128,9 @@ describe.skipIf(skip)('live preview in Chromium', () => {
     expect((await samplePixels(page)).white).toBeGreaterThan(before.white * 1.5);
   });
 
-  it('shows the assembled view and a 500-hole design', async () => {
-    await page.getByRole('radio', { name: 'Assembled' }).check();
-    await page.getByRole('img', { name: /^Assembled view of Burn chamber from the side/ }).waitFor();
+  it('shows the section through the stove and a 500-hole design', async () => {
+    await page.getByRole('radio', { name: 'Section' }).check();
+    await page.getByRole('img', { name: /^Section through the stove: Burn chamber from/ }).waitFor();
     await page.screenshot({ path: artifactPath('preview-assembled-1280.png') });
     await page.getByLabel('Design').selectOption({ label: '500-hole test can' });
     await page.getByRole('radio', { name: 'Wall strip' }).check();

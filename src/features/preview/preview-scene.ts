@@ -4,7 +4,9 @@ import { RecordingContext, type DrawCall } from '../../../shared/drawing/recordi
 import type { Layout, Piece } from '../../../shared/layout/layout-types.ts';
 import { kitText } from '../../../shared/print/kit-text.ts';
 import type { UnitSystem } from '../../../shared/units/length.ts';
-import { collectAssembledCan, drawAssembled, projectHole } from './draw-assembled.ts';
+import { drawSection, type SectionPlan } from '../../../shared/print/draw-section.ts';
+import { describeLength, type KitText } from '../../../shared/print/kit-text.ts';
+import type { PlacedPart } from '../../../shared/layout/assembly.ts';
 import { drawPieceView, flaggedHoleIds, locateHole, placeWholePiece } from './piece-view.ts';
 
 export type PreviewView = 'wall' | 'bottom' | 'assembled';
@@ -42,40 +44,44 @@ export function nameOfPart(piece: Piece): string {
 }
 
 /** Records what a view of the layout draws, with halos round the highlighted holes. */
-export function planScene(layout: Layout, units: UnitSystem, view: PreviewView, pieceId?: string, highlight?: ReadonlySet<string>): PreviewScene {
+export function planScene(layout: Layout, units: UnitSystem, view: PreviewView, pieceId?: string, highlight?: ReadonlySet<string>, highlightParts?: ReadonlySet<string>): PreviewScene {
   const text = kitText(units);
   const flagged = flaggedHoleIds(layout);
   const rec = new RecordingContext();
+  if (view === 'assembled') {
+    // Parts named by an error or a warning, and those of the finding the maker chose.
+    const lit = new Set([...layout.findings.filter((f) => f.severity !== 'note').flatMap((f) => f.partIds ?? []), ...(highlightParts ?? [])]);
+    const plan = drawSection(rec, layout, text, lit);
+    for (const part of layout.assembly) if (highlightParts?.has(part.partId)) drawPartHalo(rec, plan, part);
+    return { calls: rec.calls, bounds: boundsOfCalls(rec.calls) ?? { minX: 0, minY: 0, maxX: 100, maxY: 100 }, label: describeSection(layout, plan, text, lit), pieceId: pickPiece(layout, view, pieceId)?.id ?? null };
+  }
   const piece = pickPiece(layout, view, pieceId);
   if (!piece) return { calls: [], bounds: { minX: 0, minY: 0, maxX: 100, maxY: 100 }, label: describeEmpty(view), pieceId: null };
   const name = nameOfPart(piece);
-  let label: string;
-
-  if (view === 'assembled') {
-    const can = collectAssembledCan(layout, piece.partId, name);
-    if (!can) return { calls: [], bounds: { minX: 0, minY: 0, maxX: 100, maxY: 100 }, label: describeEmpty(view), pieceId: null };
-    // From opposite the seam, as a can is usually shown: its holes, not its joint.
-    const frontDeg = can.seamAngleDeg + 180;
-    drawAssembled(rec, can, frontDeg, text, flagged);
-    let seen = 0;
-    for (const hole of can.holes) {
-      const at = projectHole(can, hole, frontDeg);
-      if (!at) continue;
-      seen++;
-      if (highlight?.has(hole.id)) drawHalo(rec, at.x, at.y, hole.diameterMm);
-    }
-    label = `Assembled view of ${name} from the side, ${seen} of ${count(can.holes.length, 'wall hole')} in view`;
-  } else {
-    const placement = placeWholePiece(piece);
-    drawPieceView(rec, layout, piece, placement, text, flagged);
-    const holes = layout.holes.filter((h) => h.pieceId === piece.id);
-    for (const hole of holes) if (highlight?.has(hole.id)) drawHalo(rec, ...locateHole(piece, placement, hole), hole.diameterMm);
-    const band = /\((top|bottom) band\)$/.exec(piece.name)?.[0];
-    const kind = piece.kind === 'disc' ? `${piece.face === 'lid' ? 'Lid' : 'Bottom'} disc` : band ? `Wall strip ${band}` : 'Wall strip';
-    const marked = holes.filter((h) => flagged.has(h.id)).length;
-    label = `${kind} of ${name}, ${count(holes.length, 'hole')}${marked ? `, ${marked} flagged by the checks` : ''}`;
-  }
+  const placement = placeWholePiece(piece);
+  drawPieceView(rec, layout, piece, placement, text, flagged);
+  const holes = layout.holes.filter((h) => h.pieceId === piece.id);
+  for (const hole of holes) if (highlight?.has(hole.id)) drawHalo(rec, ...locateHole(piece, placement, hole), hole.diameterMm);
+  const band = /\((top|bottom) band\)$/.exec(piece.name)?.[0];
+  const kind = piece.kind === 'disc' ? `${piece.face === 'lid' ? 'Lid' : 'Bottom'} disc` : band ? `Wall strip ${band}` : 'Wall strip';
+  const marked = holes.filter((h) => flagged.has(h.id)).length;
+  const label = `${kind} of ${name}, ${count(holes.length, 'hole')}${marked ? `, ${marked} flagged by the checks` : ''}`;
   return { calls: rec.calls, bounds: boundsOfCalls(rec.calls) ?? { minX: 0, minY: 0, maxX: 100, maxY: 100 }, label, pieceId: piece.id };
+}
+
+/** A dashed frame 2 mm round a part the chosen finding is about; screen only. */
+function drawPartHalo(ctx: DrawingContext, plan: SectionPlan, part: PlacedPart): void {
+  const r = part.outerDiameterMm / 2 + 2;
+  ctx.rect(plan.axisX - r, plan.groundY - part.topMm - 2, 2 * r, part.topMm - part.bottomMm + 4, { stroke: { ...halo, dashMm: [2, 1] } });
+}
+
+/** The section in words: each part and where it stands, the dimensions, what the checks name. */
+function describeSection(layout: Layout, plan: SectionPlan, text: KitText, lit: ReadonlySet<string>): string {
+  const at = (mm: number) => describeLength(mm, text);
+  const parts = layout.assembly.map((p) => `${p.name} from ${at(p.bottomMm)} to ${at(p.topMm)}${lit.has(p.partId) ? ' (named by the checks)' : ''}`);
+  const { gapMm, jetsMm, intakeMm } = plan.dimensions;
+  const dims = [gapMm !== undefined ? `gap ${at(gapMm)}` : '', jetsMm !== undefined ? `jets at ${at(jetsMm)}` : '', intakeMm !== undefined ? `intake at ${at(intakeMm)}` : ''].filter(Boolean);
+  return `Section through the stove: ${parts.join('; ')}${dims.length ? `; ${dims.join(', ')}` : ''}`;
 }
 
 function drawHalo(ctx: DrawingContext, x: number, y: number, diameterMm: number): void {

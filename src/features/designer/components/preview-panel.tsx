@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import type { Design } from '../../../../shared/design/design-schema.ts';
 import type { Finding, Layout } from '../../../../shared/layout/index.ts';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
@@ -12,7 +12,7 @@ export type DesignView = 'wall' | 'bottom' | 'assembled' | 'above';
 const views: { id: DesignView; label: string }[] = [
   { id: 'wall', label: 'Wall strip' },
   { id: 'bottom', label: 'Bottom disc' },
-  { id: 'assembled', label: 'Assembled' },
+  { id: 'assembled', label: 'Section' },
   { id: 'above', label: 'From above' },
 ];
 
@@ -38,8 +38,9 @@ export function PreviewPanel({ design, layout, units, partIndex, view, onView, f
   const partName = part.name?.trim() || part.id;
   const pieces = layout.pieces.filter((p) => p.partId === part.id);
   // A part without a piece of this view's kind (a shell has no bottom disc) says so, rather than showing another part.
-  const piece = view === 'assembled' ? pieces[0] : pieces.find((p) => (view === 'bottom' ? p.kind === 'disc' : p.kind === 'wrap-strip'));
-  const highlight = finding ? new Set(finding.holeIds) : undefined;
+  const piece = pieces.find((p) => (view === 'bottom' ? p.kind === 'disc' : p.kind === 'wrap-strip'));
+  const highlight = useMemo(() => (finding ? new Set(finding.holeIds) : undefined), [finding]);
+  const highlightParts = useMemo(() => (finding?.partIds ? new Set(finding.partIds) : undefined), [finding]);
 
   return (
     <section aria-label="Preview" className={`flex flex-col gap-2 bg-paper ${className}`}>
@@ -53,6 +54,8 @@ export function PreviewPanel({ design, layout, units, partIndex, view, onView, f
       <div {...tabPanelProps(panelId, view)} hidden={hidden} className={`h-44 overflow-hidden rounded-lg border border-rule bg-white sm:h-80 lg:h-96 ${stale ? '[&_canvas]:opacity-60 [&_svg]:opacity-60' : ''}`}>
         {view === 'above' ? (
           <PlanView part={part} partName={partName} onSeamChange={onSeamChange} onToggleSkip={onToggleSkip} />
+        ) : view === 'assembled' ? (
+          <LayoutPreview layout={layout} units={units} view={view} pieceId={pieces[0]?.id} highlight={highlight} highlightParts={highlightParts} />
         ) : piece ? (
           <LayoutPreview layout={layout} units={units} view={view} pieceId={piece.id} highlight={highlight} />
         ) : (

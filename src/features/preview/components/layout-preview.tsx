@@ -11,6 +11,8 @@ export interface LayoutPreviewProps {
   pieceId?: string;
   /** Hole ids to emphasise, e.g. the holes of a finding the maker clicked. */
   highlight?: Set<string>;
+  /** Part ids to emphasise in the section (the parts of a finding across parts). */
+  highlightParts?: Set<string>;
 }
 
 /** Zoom per key press or button: two presses about double (common practice, no source). */
@@ -22,12 +24,12 @@ const NUDGE_PX = 40;
  * A design's pieces drawn by the same code as the printed kit, on a canvas that fills its
  * container: drag to pan, wheel or pinch to zoom; with focus, + and - zoom and the arrows pan.
  */
-export function LayoutPreview({ layout, units, view, pieceId, highlight }: LayoutPreviewProps) {
+export function LayoutPreview({ layout, units, view, pieceId, highlight, highlightParts }: LayoutPreviewProps) {
   const [controller] = useState(() => new PreviewController());
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const shown = useRef<{ size: string; view: PreviewView; pieceId: string | null } | null>(null);
   const helpId = useId();
-  const scene = useMemo(() => planScene(layout, units, view, pieceId, highlight), [layout, units, view, pieceId, highlight]);
+  const scene = useMemo(() => planScene(layout, units, view, pieceId, highlight, highlightParts), [layout, units, view, pieceId, highlight, highlightParts]);
 
   useEffect(() => {
     const canvas = canvasRef.current;

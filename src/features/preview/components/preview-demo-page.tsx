@@ -11,7 +11,7 @@ const designs = loadDemoDesigns();
 const views: [PreviewView, string][] = [
   ['wall', 'Wall strip'],
   ['bottom', 'Bottom'],
-  ['assembled', 'Assembled'],
+  ['assembled', 'Section'],
 ];
 const select = 'min-h-10 w-full rounded-md border border-rule bg-white px-3 py-2 text-base';
 

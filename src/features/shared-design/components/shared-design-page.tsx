@@ -17,7 +17,7 @@ import { useSharedDesign } from '../api/get-shared-design.ts';
 const views: { id: PreviewView; label: string }[] = [
   { id: 'wall', label: 'Wall strip' },
   { id: 'bottom', label: 'Bottom disc' },
-  { id: 'assembled', label: 'Assembled' },
+  { id: 'assembled', label: 'Section' },
 ];
 
 /** A design someone shared: anyone with the link can look at it, print its kit or copy it. */
