@@ -3,7 +3,7 @@ import type { DesignInput, Rules } from '../../../../shared/design/design-schema
 import type { UnitSystem } from '../../../../shared/units/length.ts';
 import { useProblems } from '../design-problems.tsx';
 import { DrillSetField } from './drill-set-field.tsx';
-import { TextAreaField } from './field.tsx';
+import { NumberField, TextAreaField } from './field.tsx';
 import { LengthInput } from './length-input.tsx';
 
 /** The check limits, in the order a maker thinks of them; the defaults are rules of thumb (shared/design/design-schema.ts). */
@@ -15,6 +15,21 @@ const limits: { key: keyof Rules; label: string; hint: string }[] = [
   { key: 'topMarginMm', label: 'Clearance below the top rim', hint: 'The rim bends and tears near holes.' },
   { key: 'chimeMarginMm', label: 'Clearance above the bottom chime', hint: 'The chime is thick; the bit wanders.' },
   { key: 'rimMarginMm', label: 'Clearance inside the rim of a can end', hint: 'Keeps holes on the flat of the end.' },
+];
+
+/** Limits of the checks across parts (shared/layout/checks/check-fit.ts and its neighbours); lengths, then ratios. */
+const assemblyLimits: { key: keyof Rules; label: string; hint: string }[] = [
+  { key: 'minGapMm', label: 'Gap round the chamber, at least', hint: 'Narrower, the secondary air can hardly rise and the cans bind when hot.' },
+  { key: 'maxGapMm', label: 'Gap round the chamber, at most', hint: 'Wider, the air rises slowly and cools; the jets run weak.' },
+  { key: 'minClearanceBelowMm', label: 'Room under the chamber, at least', hint: 'So primary air reaches its bottom holes.' },
+  { key: 'jetsBelowShellTopMm', label: 'Jets below the shell top, at least', hint: 'From the jets’ top edge to where the shell closes against the chamber.' },
+  { key: 'minFlameRoomMm', label: 'Room for the flame under the pot, at least', hint: 'From the top of the stove to the top of the pot stand.' },
+];
+const assemblyRatios: { key: keyof Rules; label: string; hint: string; step: number }[] = [
+  { key: 'minIntakeRatio', label: 'Shell intake, at least × primary + secondary', hint: 'Smaller, the intake chokes the stove.', step: 0.05 },
+  { key: 'concentratorMinRatio', label: 'Concentrator opening, at least × chamber', hint: 'Smaller chokes the flame.', step: 0.05 },
+  { key: 'concentratorMaxRatio', label: 'Concentrator opening, at most × chamber', hint: 'Larger does little.', step: 0.05 },
+  { key: 'minExhaustRatio', label: 'Pot stand openings, at least × flame opening', hint: 'Against the concentrator opening, or the chamber mouth.', step: 0.05 },
 ];
 
 /** What belongs to the whole design: notes, drills, paper, and the limits the checks apply. */
@@ -44,6 +59,20 @@ export function DesignSettings({ units }: { units: UnitSystem }) {
             name={`rules.${key}`}
             render={({ field }) => <LengthInput label={label} hint={hint} fine allowZero={key !== 'jetPitchWarnMm' && key !== 'jetPitchErrorMm'} units={units} valueMm={field.value} error={problemAt(`rules.${key}`)} inputRef={field.ref} onChange={(mm) => mm !== undefined && field.onChange(mm)} />}
           />
+        ))}
+      </fieldset>
+      <fieldset className="grid grid-cols-1 gap-2 rounded-md border border-rule p-3 @md:grid-cols-2">
+        <legend className="px-1 text-sm font-medium">Limits across parts</legend>
+        {assemblyLimits.map(({ key, label, hint }) => (
+          <Controller
+            key={key}
+            control={control}
+            name={`rules.${key}`}
+            render={({ field }) => <LengthInput label={label} hint={hint} fine allowZero={key !== 'maxGapMm'} units={units} valueMm={field.value} error={problemAt(`rules.${key}`)} inputRef={field.ref} onChange={(mm) => mm !== undefined && field.onChange(mm)} />}
+          />
+        ))}
+        {assemblyRatios.map(({ key, label, hint, step }) => (
+          <NumberField key={key} label={label} hint={hint} step={step} min={0} inputMode="decimal" error={problemAt(`rules.${key}`)} {...register(`rules.${key}`, { valueAsNumber: true })} />
         ))}
       </fieldset>
     </>

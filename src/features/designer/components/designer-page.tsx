@@ -72,6 +72,11 @@ function DesignerScreen({ draft }: { draft: Draft }) {
     const layout = good?.layout;
     const hole = next && layout?.holes.find((h) => h.id === next.holeIds[0]);
     const onPiece = hole && layout?.pieces.find((p) => p.id === hole.pieceId);
+    // A finding across parts is seen best in the section, where its parts are drawn heavier.
+    if (next?.partIds?.length && !onPiece) {
+      setView('assembled');
+      return;
+    }
     if (!onPiece) return;
     const index = (values.parts ?? []).findIndex((p) => p.id === onPiece.partId);
     if (index >= 0) setPartIndex(index);

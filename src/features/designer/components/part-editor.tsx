@@ -1,6 +1,6 @@
 import { Controller, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { freshId, ROLE_NAMES } from '../../../../shared/design/new-design.ts';
-import { MAX_END_PATTERNS, MAX_SIDE_ROWS, partRoleSchema, partSchema, type DesignInput } from '../../../../shared/design/design-schema.ts';
+import { MAX_END_PATTERNS, MAX_SIDE_ROWS, partRoleSchema, partSchema, type DesignInput, type PartRole } from '../../../../shared/design/design-schema.ts';
 import { findDrill } from '../../../../shared/drills/index.ts';
 import { placeNextRowHeight } from '../../../../shared/layout/place-next.ts';
 import type { UnitSystem } from '../../../../shared/units/length.ts';
@@ -16,6 +16,14 @@ const small = 'min-h-9 rounded-md border border-rule bg-white px-3 text-sm hover
 /** 3/16 in and 1/4 in: the usual jet and primary drills (common practice, no source). */
 const JET_DRILL_MM = 4.7625;
 const PRIMARY_DRILL_MM = 6.35;
+
+/** Where a part stands when "Bottom stands at" is empty (shared/layout/assembly.ts), up from the shell's bottom. */
+const USUAL_PLACE: Record<PartRole, string> = {
+  'burn-chamber': 'Up from the shell’s bottom. Empty: hung with its top level with the shell’s.',
+  shell: '',
+  concentrator: 'Up from the shell’s bottom. Empty: on top of the stove.',
+  'pot-stand': 'Up from the shell’s bottom. Empty: on the concentrator, or on top of the stove.',
+};
 
 interface PartEditorProps {
   partIndex: number;
@@ -37,6 +45,7 @@ export function PartEditor({ partIndex, partCount, units, onMove, onRemove }: Pa
   const nearest = (mm: number) => [...choices].sort((a, b) => Math.abs(a.diameterMm - mm) - Math.abs(b.diameterMm - mm))[0]?.id ?? (units === 'mm' ? 'mm:5' : 'frac:3/16');
   const nameProblem = useProblem(`${base}.name`);
   const openingProblem = useProblem(`${base}.openingDiameterMm`);
+  const bottomAtProblem = useProblem(`${base}.bottomAtMm`);
 
   function addRow() {
     const drillId = nearest(JET_DRILL_MM);
@@ -75,6 +84,26 @@ export function PartEditor({ partIndex, partCount, units, onMove, onRemove }: Pa
             Remove part<span className="sr-only">: {partName}</span>
           </button>
         </div>
+        {role !== 'shell' && (
+          <Controller
+            control={control}
+            name={`${base}.bottomAtMm`}
+            render={({ field }) => (
+              <LengthInput
+                label="Bottom stands at"
+                context={partName}
+                hint={USUAL_PLACE[role]}
+                optional
+                allowZero
+                units={units}
+                valueMm={field.value}
+                error={bottomAtProblem}
+                inputRef={field.ref}
+                onChange={field.onChange}
+              />
+            )}
+          />
+        )}
         {role === 'concentrator' && (
           <Controller
             control={control}
