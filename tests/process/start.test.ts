@@ -30,7 +30,8 @@ describe('npm start as a real process', () => {
     const dataDir = mkdtempSync(join(tmpdir(), 'canwright-data-'));
     const port = await freePort();
     const first = start({ PORT: String(port), DATA_DIR: dataDir });
-    await waitForOutput(first, /Canwright is running at/);
+    // The banner arrives in several writes: wait for its last line, not its first.
+    await waitForOutput(first, /Press Ctrl\+C to stop/);
     expect(first.output()).toContain(`http://localhost:${port}`);
     for (const account of demoAccounts) expect(first.output()).toContain(account.email);
 
