@@ -1,4 +1,5 @@
 import { findDrill } from '../drills/index.ts';
+import { describeUnprintable } from '../print/printable-text.ts';
 import { designSchema, type Design } from './design-schema.ts';
 
 /** What was wrong, as data, so each screen can say it in its own words and units. */
@@ -93,5 +94,35 @@ function findCrossFieldProblems(design: Design): DesignProblem[] {
   }
   if (design.rules.maxGapMm < design.rules.minGapMm) problems.push({ path: 'rules.maxGapMm', message: 'must not be below the narrowest gap allowed' });
   if (design.rules.concentratorMaxRatio < design.rules.concentratorMinRatio) problems.push({ path: 'rules.concentratorMaxRatio', message: 'must not be below the smallest opening allowed' });
+  problems.push(...findUnprintableText(design));
+  return problems;
+}
+
+/**
+ * Every piece of the design's own text that prints on the kit (the name, each part's name, id and
+ * can, each row's and ring pattern's label and id, keep-out labels) must be in characters the
+ * kit's fonts carry, or it would print as empty boxes: such text is refused, naming the characters.
+ */
+function findUnprintableText(design: Design): DesignProblem[] {
+  const problems: DesignProblem[] = [];
+  const check = (text: string | undefined, path: string) => {
+    const message = text === undefined ? undefined : describeUnprintable(text);
+    if (message) problems.push({ path, message });
+  };
+  check(design.name, 'name');
+  design.parts.forEach((part, p) => {
+    check(part.id, `parts.${p}.id`);
+    check(part.name, `parts.${p}.name`);
+    check(part.vessel.name, `parts.${p}.vessel.name`);
+    part.sideRows.forEach((row, r) => {
+      check(row.id, `parts.${p}.sideRows.${r}.id`);
+      check(row.label, `parts.${p}.sideRows.${r}.label`);
+      row.keepOuts.forEach((keepOut, k) => check(keepOut.label, `parts.${p}.sideRows.${r}.keepOuts.${k}.label`));
+    });
+    part.endPatterns.forEach((pattern, e) => {
+      check(pattern.id, `parts.${p}.endPatterns.${e}.id`);
+      check(pattern.label, `parts.${p}.endPatterns.${e}.label`);
+    });
+  });
   return problems;
 }

@@ -1,17 +1,21 @@
 import { randomInt } from 'node:crypto';
-import { readFile } from 'node:fs/promises';
-import { createRequire } from 'node:module';
 import fontkit from '@pdf-lib/fontkit';
 import { CustomFontSubsetEmbedder, PDFFont } from 'pdf-lib';
 import type { PDFDocument } from 'pdf-lib';
+import { PLEX_SUBSETS, type PlexSubset } from '../../../shared/print/plex-coverage.ts';
+import { plexSubsetFor } from '../../../shared/print/printable-text.ts';
+import { FONT_WEIGHTS, readPlexWoff, type FontWeight } from './plex-files.ts';
 import { convertWoffToSfnt } from './woff-to-sfnt.ts';
 
 /**
- * IBM Plex Sans for PDFs, prepared once per process: the WOFF files are unpacked to plain sfnt
- * and parsed by fontkit once, then every document gets its own subset embedders over the same
- * parsed fonts. Only glyphs a document encodes go into its file (pdf-lib subsets at save time).
+ * IBM Plex Sans for PDFs, in Fontsource's subsets (latin, latin-ext, greek, cyrillic,
+ * cyrillic-ext, vietnamese). The WOFF files are read once per process; a subset is unpacked to
+ * plain sfnt and parsed by fontkit only when a document first needs one of its characters, and
+ * then shared by every later document. Each document gets its own subset embedders over the
+ * parsed fonts, made on first use, so only the subsets a document draws go into its file, and
+ * only the glyphs it encodes (pdf-lib subsets at save time).
  */
-export type FontWeight = 'regular' | 'bold';
+export type { FontWeight } from './plex-files.ts';
 
 type Fontkit = Parameters<typeof CustomFontSubsetEmbedder.for>[0];
 type ParsedFont = ReturnType<Fontkit['create']>;
@@ -20,12 +24,6 @@ interface PreparedFont {
   sfnt: Uint8Array;
   parsed: ParsedFont;
 }
-
-/** Fontsource file names; 600 (semibold) stands in for 'bold', as in the app's CSS. */
-const FILES: Record<FontWeight, string> = {
-  regular: '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-normal.woff',
-  bold: '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-600-normal.woff',
-};
 
 /**
  * Shaping switched off: pdf-lib writes glyph ids at the font's advance widths and drops shaping
@@ -40,12 +38,35 @@ const FEATURES = Object.fromEntries(
   ),
 );
 
-let prepared: Promise<Record<FontWeight, PreparedFont>> | undefined;
+type FontKey = `${PlexSubset}-${FontWeight}`;
 
-async function prepareFont(specifier: string): Promise<PreparedFont> {
-  const path = createRequire(import.meta.url).resolve(specifier);
-  const sfnt = convertWoffToSfnt(new Uint8Array(await readFile(path)));
-  return { sfnt, parsed: memoizeLayout(fontkit.create(sfnt)) };
+/** The shipped files' bytes (about 150 kB for all twelve), read once per process. */
+let files: Promise<Map<FontKey, Uint8Array>> | undefined;
+/** Parsed subsets, each on first need. */
+const parsedFonts = new Map<FontKey, PreparedFont>();
+
+function readPlexFiles(): Promise<Map<FontKey, Uint8Array>> {
+  if (!files) {
+    const keys = PLEX_SUBSETS.flatMap((subset) => FONT_WEIGHTS.map((weight) => [subset, weight] as const));
+    files = Promise.all(keys.map(async ([subset, weight]) => [`${subset}-${weight}`, await readPlexWoff(subset, weight)] as const)).then((entries) => new Map(entries));
+    // A failed read is not cached: the next document tries again.
+    files.catch(() => {
+      files = undefined;
+    });
+  }
+  return files;
+}
+
+function parsedFont(woffs: Map<FontKey, Uint8Array>, key: FontKey): PreparedFont {
+  let font = parsedFonts.get(key);
+  if (!font) {
+    const woff = woffs.get(key);
+    if (!woff) throw new Error(`No font file for ${key}`);
+    const sfnt = convertWoffToSfnt(woff);
+    font = { sfnt, parsed: memoizeLayout(fontkit.create(sfnt)) };
+    parsedFonts.set(key, font);
+  }
+  return font;
 }
 
 /**
@@ -67,16 +88,10 @@ function memoizeLayout(parsed: ParsedFont): ParsedFont {
   return Object.create(parsed, { layout: { value: layout } }) as ParsedFont;
 }
 
-/** Reads and parses both weights on first use; later calls share the result. */
-export function preparePlexFonts(): Promise<Record<FontWeight, PreparedFont>> {
-  if (!prepared) {
-    prepared = Promise.all([prepareFont(FILES.regular), prepareFont(FILES.bold)]).then(([regular, bold]) => ({ regular, bold }));
-    // A failed read is not cached: the next document tries again.
-    prepared.catch(() => {
-      prepared = undefined;
-    });
-  }
-  return prepared;
+/** Reads the font files on first use (later calls share them) and parses the latin subset, which every kit uses. */
+export async function preparePlexFonts(): Promise<void> {
+  const woffs = await readPlexFiles();
+  for (const weight of FONT_WEIGHTS) parsedFont(woffs, `latin-${weight}`);
 }
 
 /** ISO 32000-1, 9.6.4: a subset font's name starts with six upper-case letters and a plus. */
@@ -85,18 +100,48 @@ function createSubsetTag(): string {
 }
 
 /**
- * Makes subset fonts for one document without embedding them: the caller embeds only the
- * weights it used (`font.embed()` before saving), so an unused weight costs nothing.
+ * CustomFontSubsetEmbedder.for only awaits fontkit.create and calls this constructor; the font is
+ * already parsed here, and text is drawn synchronously, so the embedder is made directly.
  */
-export async function createPlexFonts(doc: PDFDocument): Promise<Record<FontWeight, PDFFont>> {
-  const fonts = await preparePlexFonts();
-  const create = async (weight: FontWeight): Promise<PDFFont> => {
-    const { sfnt, parsed } = fonts[weight];
-    // pdf-lib asks a fontkit to parse the bytes; hand it the font parsed once per process.
-    const cachedKit: Fontkit = { create: () => parsed };
-    const name = `${createSubsetTag()}+${parsed.postscriptName ?? 'IBMPlexSans'}`;
-    const embedder = await CustomFontSubsetEmbedder.for(cachedKit, sfnt, name, FEATURES);
-    return PDFFont.of(doc.context.nextRef(), doc, embedder);
+const SubsetEmbedder = CustomFontSubsetEmbedder as unknown as new (font: ParsedFont, fontData: Uint8Array, customFontName: string, fontFeatures: typeof FEATURES) => CustomFontSubsetEmbedder;
+
+/** One document's fonts: for each character, the subset font that prints it. */
+export interface PlexFonts {
+  /**
+   * The font that prints `char` (one code point) in `weight`: the first subset that covers it
+   * (shared/print/printable-text.ts); latin when none does (forms refuse such text; it prints
+   * the font's empty box rather than failing the kit).
+   */
+  fontFor(weight: FontWeight, char: string): PDFFont;
+}
+
+/**
+ * Makes subset fonts for one document without embedding them, each on first use: the caller
+ * embeds only the fonts it used (`font.embed()` before saving), so an unused subset or weight
+ * costs nothing.
+ */
+export async function createPlexFonts(doc: PDFDocument): Promise<PlexFonts> {
+  const woffs = await readPlexFiles();
+  const fonts = new Map<FontKey, PDFFont>();
+  const byChar: Record<FontWeight, Map<string, PDFFont>> = { regular: new Map(), bold: new Map() };
+  const fontOf = (key: FontKey): PDFFont => {
+    let font = fonts.get(key);
+    if (!font) {
+      const { sfnt, parsed } = parsedFont(woffs, key);
+      const name = `${createSubsetTag()}+${parsed.postscriptName ?? 'IBMPlexSans'}`;
+      font = PDFFont.of(doc.context.nextRef(), doc, new SubsetEmbedder(parsed, sfnt, name, FEATURES));
+      fonts.set(key, font);
+    }
+    return font;
   };
-  return { regular: await create('regular'), bold: await create('bold') };
+  return {
+    fontFor(weight, char) {
+      let font = byChar[weight].get(char);
+      if (!font) {
+        const subset = plexSubsetFor(char.codePointAt(0) ?? 0) ?? 'latin';
+        byChar[weight].set(char, (font = fontOf(`${subset}-${weight}`)));
+      }
+      return font;
+    },
+  };
 }

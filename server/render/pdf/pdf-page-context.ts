@@ -2,7 +2,7 @@ import type { PDFFont } from 'pdf-lib';
 import { palette } from '../../../shared/drawing/drawing-context.ts';
 import type { DrawingContext, InkColor, ShapeStyle, Stroke, TextStyle } from '../../../shared/drawing/drawing-context.ts';
 import { AsciiBuffer } from './ascii-buffer.ts';
-import type { FontWeight } from './fonts.ts';
+import type { FontWeight, PlexFonts } from './fonts.ts';
 
 /** 1 in = 72 pt = 25.4 mm (ISO 32000-1, 8.3.2.3: default user space unit is 1/72 in). */
 export const PT_PER_MM = 72 / 25.4;
@@ -51,9 +51,9 @@ export class PdfPageContext implements DrawingContext {
   private lastStroke: Stroke | null = null;
 
   constructor(
-    private readonly fonts: Record<FontWeight, PDFFont>,
+    private readonly fonts: PlexFonts,
     /** Returns the page's resource name for a font, registering it on first use. */
-    private readonly useFont: (weight: FontWeight) => string,
+    private readonly useFont: (font: PDFFont) => string,
     /** Operands of the page's `cm`, from `pageMatrix`. */
     matrix: string,
   ) {
@@ -90,21 +90,23 @@ export class PdfPageContext implements DrawingContext {
 
   text(x: number, y: number, text: string, style: TextStyle): void {
     if (text.length === 0) return;
-    const weight = style.weight ?? 'regular';
-    const font = this.fonts[weight];
+    const runs = splitRuns(this.fonts, style.weight ?? 'regular', text);
     const size = style.sizeMm;
     const shift = style.anchor === 'middle' ? 0.5 : style.anchor === 'end' ? 1 : 0;
     const rad = ((style.rotateDeg ?? 0) * Math.PI) / 180;
     const cos = Math.cos(rad);
     const sin = Math.sin(rad);
     // The text runs along (cos, -sin) in y-down sheet space: counter-clockwise on paper.
-    const back = shift === 0 ? 0 : measureText(font, text) * size * shift;
+    const back = shift === 0 ? 0 : runs.reduce((sum, run) => sum + measureText(run.font, run.text), 0) * size * shift;
     const ox = x - back * cos;
     const oy = y + back * sin;
     const matrix = [size * cos, -size * sin, -size * sin, -size * cos, ox, oy].map(fmt).join(' ');
     this.setFill(style.color);
-    const name = this.useFont(weight);
-    this.append(`BT /${name} 1 Tf ${matrix} Tm ${encodeText(font, text)} Tj ET\n`);
+    // ISO 32000-1, 9.4.3: each Tj moves the text position on by the run's widths, so the next
+    // run in another font starts where this one ended.
+    let operators = `BT ${matrix} Tm`;
+    for (const run of runs) operators += ` /${this.useFont(run.font)} 1 Tf ${encodeText(run.font, run.text)} Tj`;
+    this.append(`${operators} ET\n`);
   }
 
   /** Closes the page's graphics state and returns its content stream, uncompressed. */
@@ -187,6 +189,22 @@ export class PdfPageContext implements DrawingContext {
 export function pageMatrix(heightPt: number, scaleX: number, scaleY: number): string {
   const f = (n: number): string => String(Math.round(n * 1e6) / 1e6);
   return `${f(PT_PER_MM * scaleX)} 0 0 ${f(-PT_PER_MM * scaleY)} 0 ${f(heightPt)}`;
+}
+
+/**
+ * A string as runs of characters in one font each: every character goes to the first font that
+ * prints it (a Greek or Cyrillic word inside a Latin label switches font and back), so each run's
+ * glyphs and widths come from the font that draws them.
+ */
+function splitRuns(fonts: PlexFonts, weight: FontWeight, text: string): { font: PDFFont; text: string }[] {
+  const runs: { font: PDFFont; text: string }[] = [];
+  let last: { font: PDFFont; text: string } | undefined;
+  for (const char of text) {
+    const font = fonts.fontFor(weight, char);
+    if (last && last.font === font) last.text += char;
+    else runs.push((last = { font, text: char }));
+  }
+  return runs;
 }
 
 /**

@@ -3,7 +3,6 @@ import { PDFDocument, PDFName, PrintScaling } from 'pdf-lib';
 import type { PDFFont, PDFPage } from 'pdf-lib';
 import type { DrawingContext } from '../../../shared/drawing/drawing-context.ts';
 import { createPlexFonts } from './fonts.ts';
-import type { FontWeight } from './fonts.ts';
 import { PdfPageContext, PT_PER_MM, pageMatrix } from './pdf-page-context.ts';
 
 export interface PdfDocumentOptions {
@@ -77,14 +76,15 @@ export async function createPdfDocument(options: PdfDocumentOptions): Promise<Pd
       page.setBleedBox(0, 0, widthPt, heightPt);
       page.setTrimBox(0, 0, widthPt, heightPt);
       page.setArtBox(0, 0, widthPt, heightPt);
-      const names = new Map<FontWeight, string>();
-      const useFont = (weight: FontWeight): string => {
-        let name = names.get(weight);
+      const names = new Map<PDFFont, string>();
+      const useFont = (font: PDFFont): string => {
+        let name = names.get(font);
         if (name === undefined) {
-          name = weight === 'regular' ? 'F1' : 'F2';
-          page.node.setFontDictionary(PDFName.of(name), fonts[weight].ref);
-          usedFonts.add(fonts[weight]);
-          names.set(weight, name);
+          // One resource name a font on this page: F1, F2, ... in the order the page uses them.
+          name = `F${names.size + 1}`;
+          page.node.setFontDictionary(PDFName.of(name), font.ref);
+          usedFonts.add(font);
+          names.set(font, name);
         }
         return name;
       };
