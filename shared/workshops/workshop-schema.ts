@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { describeUnprintable } from '../print/printable-text.ts';
 import { paperPreferenceSchema } from '../account/preferences.ts';
 import { burnSchema } from '../burns/burn-schema.ts';
 import { designSummarySchema } from '../library/library-schemas.ts';
@@ -19,8 +20,13 @@ export const INVITATIONS_PER_REQUEST_MAX = 200;
 /** An invitation lasts two weeks, long enough for a session booked ahead (common practice, no source). */
 export const INVITATION_DAYS = 14;
 
-const title = z.string().trim().min(1).max(WORKSHOP_TITLE_MAX);
-const place = z.string().trim().max(WORKSHOP_PLACE_MAX);
+/** The title and place print on the class pack's cover: only characters its fonts carry (shared/print/printable-text.ts). */
+const printable = (text: string, ctx: z.RefinementCtx) => {
+  const message = describeUnprintable(text);
+  if (message) ctx.addIssue({ code: 'custom', message });
+};
+const title = z.string().trim().min(1).max(WORKSHOP_TITLE_MAX).superRefine(printable);
+const place = z.string().trim().max(WORKSHOP_PLACE_MAX).superRefine(printable);
 const notes = z.string().trim().max(WORKSHOP_NOTES_MAX);
 const startsAt = z.iso.datetime({ offset: true, message: 'must be a date and time, e.g. 2026-12-10T18:30:00Z' });
 const capacity = z.number().int().min(1).max(WORKSHOP_CAPACITY_MAX);
