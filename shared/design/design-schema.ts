@@ -94,7 +94,7 @@ export const endPatternSchema = z.object({
 });
 export type EndPattern = z.infer<typeof endPatternSchema>;
 
-export const partRoleSchema = z.enum(['burn-chamber', 'shell', 'concentrator', 'pot-stand']);
+export const partRoleSchema = z.enum(['burn-chamber', 'shell', 'concentrator', 'pot-stand', 'intake-collar']);
 export type PartRole = z.infer<typeof partRoleSchema>;
 
 export const partSchema = z.object({
@@ -130,7 +130,7 @@ export const rulesSchema = z.object({
   topMarginMm: z.number().min(0).max(50).default(6),
   chimeMarginMm: z.number().min(0).max(50).default(6),
   rimMarginMm: z.number().min(0).max(50).default(3),
-  /** Across parts (shared/layout/checks/check-assembly.ts), all common practice, no source: */
+  /** Across parts (shared/layout/checks/check-fit.ts and its neighbours), all common practice, no source: */
   /** the gap round the chamber, 3 mm to 25 mm (1 in), */
   minGapMm: z.number().min(0).max(100).default(3),
   maxGapMm: z.number().positive().max(300).default(25),

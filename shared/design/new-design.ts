@@ -2,7 +2,7 @@ import { vesselCatalogue, vesselFromCatalogue } from '../vessels/catalogue.ts';
 import type { UnitSystem } from '../units/length.ts';
 import { DESIGN_SCHEMA_VERSION, type DesignInput, type PartInput, type PartRole } from './design-schema.ts';
 
-export const ROLE_NAMES: Record<PartRole, string> = { 'burn-chamber': 'Burn chamber', shell: 'Outer shell', concentrator: 'Concentrator', 'pot-stand': 'Pot stand' };
+export const ROLE_NAMES: Record<PartRole, string> = { 'burn-chamber': 'Burn chamber', shell: 'Outer shell', concentrator: 'Concentrator', 'pot-stand': 'Pot stand', 'intake-collar': 'Intake collar' };
 
 /** A No. 303 food can: the usual first burn chamber (common practice, no source). */
 const FIRST_CHAMBER = 'food-303x406';
@@ -33,10 +33,39 @@ export function blankDesign(units: UnitSystem): DesignInput {
  */
 export function newPart(role: PartRole, design: DesignInput): PartInput {
   const parts = design.parts ?? [];
+  if (role === 'intake-collar') return newCollar(parts);
   const chamber = parts.find((p) => p.role === 'burn-chamber');
   const wider = chamber ? [...vesselCatalogue].sort((a, b) => a.diameterMm - b.diameterMm).find((e) => e.diameterMm >= chamber.vessel.outerDiameterMm + SHELL_CLEARANCE_MM) : undefined;
   const canId = role === 'burn-chamber' || !wider ? FIRST_CHAMBER : wider.id;
   const base = role === 'burn-chamber' ? 'chamber' : role;
   const sameRole = parts.filter((p) => p.role === role).length;
   return { id: freshId(base, parts), role, name: sameRole ? `${ROLE_NAMES[role]} ${sameRole + 1}` : ROLE_NAMES[role], vessel: vesselFromCatalogue(canId), sideRows: [], endPatterns: [] };
+}
+
+/** Band metal for a collar: a strip cut from a can wall (typical tinplate, from memory). */
+export const COLLAR_BAND_MM = { heightMm: 32, wallMm: 0.25 } as const;
+
+/**
+ * A collar is a band cut from another can's wall, wrapped round the shell over its intake row: its
+ * inside is the shell's outside, so its outside is the shell's diameter plus two band thicknesses.
+ */
+function newCollar(parts: NonNullable<DesignInput['parts']>): PartInput {
+  const shell = parts.find((p) => p.role === 'shell');
+  const shellDiameterMm = shell?.vessel.outerDiameterMm ?? vesselFromCatalogue(FIRST_CHAMBER).outerDiameterMm + SHELL_CLEARANCE_MM;
+  const sameRole = parts.filter((p) => p.role === 'intake-collar').length;
+  return {
+    id: freshId('collar', parts),
+    role: 'intake-collar',
+    name: sameRole ? `${ROLE_NAMES['intake-collar']} ${sameRole + 1}` : ROLE_NAMES['intake-collar'],
+    vessel: {
+      source: 'measured',
+      name: 'Band cut from a can wall',
+      outerDiameterMm: Math.ceil((shellDiameterMm + 2 * COLLAR_BAND_MM.wallMm) * 100) / 100,
+      heightMm: COLLAR_BAND_MM.heightMm,
+      wallThicknessMm: COLLAR_BAND_MM.wallMm,
+      seamAngleDeg: shell?.vessel.seamAngleDeg ?? 0,
+    },
+    sideRows: [],
+    endPatterns: [],
+  };
 }

@@ -1,5 +1,6 @@
 import type { Design, Part, PartRole } from '../design/design-schema.ts';
 import { ROLE_NAMES } from '../design/new-design.ts';
+import { usualCollarBottomMm } from './collar.ts';
 
 /**
  * The stove put together: where each part stands, in mm up from the bottom of the shell (or of the
@@ -57,7 +58,7 @@ export function assemble(design: Pick<Design, 'parts'>): Assembly {
     placed.set(part.id, at);
     return at;
   };
-  const highestTop = () => Math.max(0, ...[...placed.values()].map((p) => p.topMm));
+  const highestTop = () => Math.max(0, ...[...placed.values()].filter((p) => p.role !== 'intake-collar').map((p) => p.topMm));
 
   const shellPart = first('shell');
   const shell = shellPart ? place(shellPart, () => 0) : undefined;
@@ -65,6 +66,8 @@ export function assemble(design: Pick<Design, 'parts'>): Assembly {
   const chamber = chamberPart ? place(chamberPart, () => (shell ? Math.max(shell.bottomMm, shell.topMm - chamberPart.vessel.heightMm) : 0)) : undefined;
   // Other shells and chambers (a design may hold spares) stand on the ground beside the stove.
   for (const part of design.parts) if ((part.role === 'shell' || part.role === 'burn-chamber') && !placed.has(part.id)) place(part, () => 0);
+  // A collar is round the shell, not on top of anything: placed before the parts that stand on the stove.
+  for (const part of design.parts) if (part.role === 'intake-collar') place(part, () => (shell?.bottomMm ?? 0) + usualCollarBottomMm(design, part));
   const concentratorPart = first('concentrator');
   const concentrator = concentratorPart ? place(concentratorPart, highestTop) : undefined;
   const potStandPart = first('pot-stand');

@@ -13,12 +13,14 @@ import { checkHeights } from './checks/check-heights.ts';
 import { checkIntakeArea } from './checks/check-intake-area.ts';
 import { checkTopParts } from './checks/check-top-parts.ts';
 import { assemble } from './assembly.ts';
+import { buildCollar } from './collar.ts';
+import { checkCollar } from './checks/check-collar.ts';
 import { checkSpacing } from './checks/check-spacing.ts';
 import { createDrillLookup } from './drill-lookup.ts';
 import { countEndPatternHoles } from './end-pattern.ts';
 import type { Finding, Hole, Layout, Severity } from './layout-types.ts';
 
-const checks: Check[] = [checkSpacing, checkEdges, checkJetPitch, checkDrillSet, checkDroppedHoles, checkFit, checkHeights, checkIntakeArea, checkTopParts];
+const checks: Check[] = [checkSpacing, checkEdges, checkJetPitch, checkDrillSet, checkDroppedHoles, checkFit, checkHeights, checkIntakeArea, checkTopParts, checkCollar];
 const severityOrder: Record<Severity, number> = { error: 0, warning: 1, note: 2 };
 
 /** Lays out a valid design: pieces, holes and marks in mm, group totals, airflow and findings. */
@@ -28,14 +30,31 @@ export function layoutDesign(design: Design): Layout {
 
   const drills = createDrillLookup();
   const assembly = assemble(design);
-  const layout: Layout = { designName: design.name, pieces: [], holes: [], marks: [], groups: [], airflow: summarizeAirflow([], design.airflow.targetRatio), findings: [], assembly: assembly.parts };
+  const layout: Layout = { designName: design.name, pieces: [], holes: [], marks: [], groups: [], airflow: summarizeAirflow([], design.airflow.targetRatio), findings: [], assembly: assembly.parts, collars: [] };
   const dropped = new Map<string, number>();
   for (const part of design.parts) {
+    if (part.role === 'intake-collar') continue;
     const placed = buildPart(part, design, drills);
     layout.pieces.push(...placed.pieces);
     layout.holes.push(...placed.holes);
     layout.marks.push(...placed.marks);
     for (const [rowId, count] of placed.dropped) dropped.set(`${part.id}/${rowId}`, count);
+  }
+
+  // Collars copy the shell's intake holes, so they are built once the shell's are placed.
+  const collarPieces = new Set<string>();
+  const shell = assembly.shell ? design.parts.find((p) => p.id === assembly.shell!.partId) : undefined;
+  for (const part of design.parts) {
+    if (part.role !== 'intake-collar' || !shell) continue;
+    const at = assembly.parts.find((p) => p.partId === part.id)!;
+    const followedRow = shell.sideRows.find((r) => r.group === 'intake');
+    const shellIntake = followedRow ? layout.holes.filter((h) => h.sourceId === followedRow.id && layout.pieces.some((piece) => piece.id === h.pieceId && piece.partId === shell.id)) : [];
+    const built = buildCollar(part, at.bottomMm - assembly.shell!.bottomMm, shell, shellIntake, design);
+    layout.pieces.push(built.piece);
+    layout.holes.push(...built.holes);
+    layout.marks.push(...built.marks);
+    layout.collars.push(built.range);
+    collarPieces.add(built.piece.id);
   }
 
   const holesByPiece = new Map<string, Hole[]>();
@@ -44,8 +63,9 @@ export function layoutDesign(design: Design): Layout {
     if (list) list.push(hole);
     else holesByPiece.set(hole.pieceId, [hole]);
   }
-  const context: CheckContext = { design, pieces: layout.pieces, holesByPiece, dropped, assembly };
-  layout.groups = totalGroups(layout.holes);
+  const context: CheckContext = { design, pieces: layout.pieces, holesByPiece, dropped, assembly, collars: layout.collars };
+  // A collar's holes sit over the shell's: the air passes both, so it is counted once, at the shell.
+  layout.groups = totalGroups(collarPieces.size ? layout.holes.filter((h) => !collarPieces.has(h.pieceId)) : layout.holes);
   layout.airflow = summarizeAirflow(layout.groups, design.airflow.targetRatio);
   const findings: Finding[] = checks.flatMap((check) => check(context));
   findings.push(...judgeAirflow(layout.airflow));
@@ -89,5 +109,6 @@ function tooManyHoles(design: Design, requested: number): Layout {
       },
     ],
     assembly: assemble(design).parts,
+    collars: [],
   };
 }

@@ -1,5 +1,6 @@
 import type { HoleGroup, PartRole } from '../design/design-schema.ts';
 import type { PlacedPart } from './assembly.ts';
+import type { CollarRange } from './collar.ts';
 
 /**
  * The result of laying out a design: plain data in millimetres. The preview, the PDF and the
@@ -77,7 +78,9 @@ export type Mark =
   | { kind: 'centre-cross'; pieceId: string }
   /** A circle to cut out whole: a flame concentrator's opening. */
   | { kind: 'opening-circle'; pieceId: string; radiusMm: number }
-  | { kind: 'index-mark'; pieceId: string; angleDeg: number };
+  | { kind: 'index-mark'; pieceId: string; angleDeg: number }
+  /** An intake collar's scale along its top edge: read against the shell's seam (shared/layout/collar.ts). */
+  | { kind: 'collar-scale'; pieceId: string; ticks: { xMm: number; label: string; fraction: number }[] };
 
 export type Severity = 'error' | 'warning' | 'note';
 
@@ -118,4 +121,6 @@ export interface Layout {
   findings: Finding[];
   /** Where each part stands in the put-together stove (shared/layout/assembly.ts). */
   assembly: PlacedPart[];
+  /** The intake range each intake collar gives (its holes are not in `groups`). */
+  collars: CollarRange[];
 }

@@ -46,6 +46,8 @@ export function drawStrip(ctx: DrawingContext, piece: WrapStripPiece, placement:
     if (span) ctx.line(sx(span[0]), canY(mark.yMm), sx(span[1]), canY(mark.yMm), strokes.guide);
   }
 
+  for (const mark of layout.marks) if (mark.kind === 'collar-scale' && mark.pieceId === piece.id) drawCollarScale(ctx, mark.ticks, H, from, to, sx, sy, text);
+
   const rows = new Map<string, Hole[]>();
   for (const hole of layout.holes) {
     if (hole.pieceId !== piece.id) continue;
@@ -91,4 +93,29 @@ function drawJoins(ctx: DrawingContext, placement: Placement, H: number, sx: (x:
     // Upright in the narrow shared band, so it never runs past the tile.
     ctx.text(sx(mid) + 1, sy(H / 2), text.join(letter), { ...type.label, anchor: 'middle', weight: 'bold', rotateDeg: 90 });
   }
+}
+
+/**
+ * An intake collar's scale: a tick down from the top edge at each setting's turn, labelled, and the
+ * way to read it. Ticks are strip x, so they go through the same placement as the holes.
+ */
+function drawCollarScale(
+  ctx: DrawingContext,
+  ticks: { xMm: number; label: string }[],
+  H: number,
+  from: number,
+  to: number,
+  sx: (x: number) => number,
+  sy: (y: number) => number,
+  text: KitText,
+): void {
+  const shown = ticks.filter((t) => t.xMm >= from - 1e-9 && t.xMm <= to + 1e-9);
+  if (shown.length === 0) return;
+  for (const tick of shown) {
+    ctx.line(sx(tick.xMm), sy(H), sx(tick.xMm), sy(H - 3), strokes.edge);
+    // Upright, hanging from the tick: marks a few mm apart still read apart.
+    ctx.text(sx(tick.xMm) + 0.7, sy(H - 3.5), tick.label, { ...type.tiny, anchor: 'end', rotateDeg: 90 });
+  }
+  const leftmost = Math.min(...shown.map((t) => t.xMm));
+  ctx.text(sx(leftmost) - 2, sy(H) + 2.6, text.collarScale, { ...type.tiny, anchor: 'end' });
 }

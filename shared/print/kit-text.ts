@@ -11,6 +11,8 @@ export interface KitText {
   bottomEdge: string;
   topEdge: string;
   tapeTab: string;
+  /** Over an intake collar's scale. */
+  collarScale: string;
   cutOut: string;
   cutOpening: string;
   indexMark: string;
@@ -29,6 +31,7 @@ export function kitText(units: UnitSystem): KitText {
     bottomEdge: 'Bottom edge: level with the bottom of the can',
     topEdge: 'Top edge: level with the rim of the can',
     tapeTab: 'Tape over the start',
+    collarScale: 'Intake: turn until the shell’s seam sits under a mark',
     cutOut: 'Cut on this line',
     cutOpening: 'Cut out the opening',
     indexMark: 'Line up with the seam',

@@ -1,5 +1,6 @@
 import type { Design } from '../../design/design-schema.ts';
 import type { Assembly } from '../assembly.ts';
+import type { CollarRange } from '../collar.ts';
 import type { Finding, Hole, Piece } from '../layout-types.ts';
 
 export interface CheckContext {
@@ -10,6 +11,8 @@ export interface CheckContext {
   dropped: Map<string, number>;
   /** Where each part stands in the put-together stove. */
   assembly: Assembly;
+  /** The intake range of each intake collar. */
+  collars?: CollarRange[];
 }
 
 export type Check = (context: CheckContext) => Finding[];

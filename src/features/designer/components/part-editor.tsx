@@ -23,6 +23,7 @@ const USUAL_PLACE: Record<PartRole, string> = {
   shell: '',
   concentrator: 'Up from the shell’s bottom. Empty: on top of the stove.',
   'pot-stand': 'Up from the shell’s bottom. Empty: on the concentrator, or on top of the stove.',
+  'intake-collar': 'Up from the shell’s bottom. Empty: centred on the shell’s intake row.',
 };
 
 interface PartEditorProps {
@@ -113,20 +114,28 @@ export function PartEditor({ partIndex, partCount, units, onMove, onRemove }: Pa
         )}
       </fieldset>
       <VesselField partIndex={partIndex} units={units} partName={partName} />
-      {rows.fields.map((field, r) => (
-        <SideRowEditor key={field.id} partIndex={partIndex} rowIndex={r} units={units} onRemove={() => rows.remove(r)} />
-      ))}
-      {patterns.fields.map((field, e) => (
-        <EndPatternEditor key={field.id} partIndex={partIndex} patternIndex={e} units={units} onRemove={() => patterns.remove(e)} />
-      ))}
-      <div className="flex flex-wrap gap-2">
-        <button type="button" className={small} disabled={rows.fields.length >= MAX_SIDE_ROWS} onClick={addRow}>
-          Add a row round the wall
-        </button>
-        <button type="button" className={small} disabled={patterns.fields.length >= MAX_END_PATTERNS} onClick={addRings}>
-          Add rings on a can end
-        </button>
-      </div>
+      {role === 'intake-collar' ? (
+        <p className="rounded-md border border-rule bg-white p-3 text-sm">
+          A band cut from a can wall, wrapped round the outer shell over its intake row. Its holes follow that row: the same drill at the same angles, so fully open they sit over the shell’s. Turn it round the shell to close the intake partly; its printed band carries a scale (open, 3/4, 1/2, 1/4, closed) to read against the shell’s seam.
+        </p>
+      ) : (
+        <>
+          {rows.fields.map((field, r) => (
+            <SideRowEditor key={field.id} partIndex={partIndex} rowIndex={r} units={units} onRemove={() => rows.remove(r)} />
+          ))}
+          {patterns.fields.map((field, e) => (
+            <EndPatternEditor key={field.id} partIndex={partIndex} patternIndex={e} units={units} onRemove={() => patterns.remove(e)} />
+          ))}
+          <div className="flex flex-wrap gap-2">
+            <button type="button" className={small} disabled={rows.fields.length >= MAX_SIDE_ROWS} onClick={addRow}>
+              Add a row round the wall
+            </button>
+            <button type="button" className={small} disabled={patterns.fields.length >= MAX_END_PATTERNS} onClick={addRings}>
+              Add rings on a can end
+            </button>
+          </div>
+        </>
+      )}
     </div>
   );
 }
