@@ -34,6 +34,10 @@ export interface BuildSheetContent {
   title: string;
   materials: { part: string; text: string }[];
   holes: { part: string; groups: BuildSheetHoleGroup[] }[];
+  /** Primary : secondary open area against the target, in words. */
+  airflow: string;
+  /** Every error and warning still open, so a printed kit never hides one (empty: none). */
+  openChecks: { severity: 'error' | 'warning'; message: string }[];
   orderOfWork: string[];
   safety: string[];
 }
@@ -61,7 +65,17 @@ export function buildSheetContent(design: Design, layout: Layout, pilots: Readon
       });
       return [{ part: part.name ?? part.role, groups }];
     }),
+    airflow: describeAirflow(layout),
+    openChecks: layout.findings.flatMap((f) => (f.severity === 'note' ? [] : [{ severity: f.severity, message: f.message }])),
     orderOfWork: ORDER_OF_WORK,
     safety: SAFETY_NOTES,
   };
+}
+
+/** "Primary : secondary open area 4.9 : 1 (target 5 : 1): 1,204 mm² : 246 mm²." */
+export function describeAirflow(layout: Pick<Layout, 'airflow'>): string {
+  const { primaryAreaMm2, secondaryAreaMm2, ratio, targetRatio } = layout.airflow;
+  const areas = `${Math.round(primaryAreaMm2).toLocaleString('en-US')} mm² : ${Math.round(secondaryAreaMm2).toLocaleString('en-US')} mm²`;
+  if (ratio === null) return `Primary : secondary open area: no secondary holes (target ${targetRatio} : 1); primary ${Math.round(primaryAreaMm2).toLocaleString('en-US')} mm².`;
+  return `Primary : secondary open area ${Math.round(ratio * 10) / 10} : 1 (target ${targetRatio} : 1): ${areas}.`;
 }

@@ -15,6 +15,12 @@ export function drawBuildSheet(ctx: DrawingContext, content: BuildSheetContent, 
     for (const g of part.groups) write.line(`• ${g.label}: ${g.count} × ${g.drill}${g.pilot ? `, pilot ${g.pilot}` : ''}`, type.label, 3);
   }
 
+  write.heading('Checks still open');
+  write.line(content.airflow);
+  if (content.openChecks.length === 0) write.line('None: every check passed.');
+  for (const check of content.openChecks) write.line(`${check.severity === 'error' ? 'Error' : 'Warning'}: ${check.message}`, check.severity === 'error' ? { ...type.label, weight: 'bold' } : type.label, 3);
+  if (content.openChecks.length > 0) write.line('Holes a check flagged carry a black triangle on the templates.', type.small);
+
   write.heading('Order of work');
   content.orderOfWork.forEach((step, i) => write.line(`${i + 1}. ${step}`));
 

@@ -4,6 +4,7 @@ import { wrapText } from './draw-build-sheet.ts';
 import { describeDrill, type KitText } from './kit-text.ts';
 import { drawCheckSquares, drawRuler } from './draw-ruler.ts';
 import { strokes, type } from './draw-style.ts';
+import { drawFlagSymbol } from './draw-hole.ts';
 import type { Sheet } from './imposition-types.ts';
 
 export interface KitInfo {
@@ -13,6 +14,8 @@ export interface KitInfo {
   date: string;
   /** Drill label -> pilot drill label, where a pilot is advised. */
   pilots: Map<string, string>;
+  /** Set per sheet by drawKitSheet: the sheet shows a hole a check flagged, so its legend explains the mark. */
+  flaggedOnSheet?: boolean;
 }
 
 export interface LegendRow {
@@ -40,14 +43,19 @@ export function drawFurniture(ctx: DrawingContext, sheet: Sheet, sheetCount: num
   const l = f.drillLegend;
   ctx.rect(l.x, l.y, l.width, l.height, { stroke: strokes.frame });
   ctx.text(l.x + 1.5, l.y + 4, 'Drills on this sheet', { ...type.label, weight: 'bold' });
-  const rowsThatFit = Math.max(1, Math.floor((l.height - 6) / 3.8));
+  // A sheet with flagged holes keeps its last line for the flag's legend.
+  const rowsThatFit = Math.max(1, Math.floor((l.height - 6) / 3.8) - (info.flaggedOnSheet ? 1 : 0));
   legend.slice(0, rowsThatFit).forEach(({ hole, count }, i) => {
     const pilot = info.pilots.get(hole.drillId);
     const line = `${count} × ${describeDrill(hole, text)}${pilot ? `, pilot ${pilot}` : ''}`;
     ctx.text(l.x + 1.5, l.y + 8.2 + i * 3.8, fit(line, l.width - 3, type.small.sizeMm), type.small);
   });
   if (legend.length === 0) ctx.text(l.x + 1.5, l.y + 8, 'No holes on this sheet', type.small);
-  if (legend.length > rowsThatFit) ctx.text(l.x + 1.5, l.y + l.height - 1.2, `and ${legend.length - rowsThatFit} more sizes (see the build sheet)`, type.tiny);
+  if (legend.length > rowsThatFit) ctx.text(l.x + 1.5, l.y + l.height - (info.flaggedOnSheet ? 5 : 1.2), `and ${legend.length - rowsThatFit} more sizes (see the build sheet)`, type.tiny);
+  if (info.flaggedOnSheet) {
+    drawFlagSymbol(ctx, l.x + 3, l.y + l.height - 2.6);
+    ctx.text(l.x + 5.5, l.y + l.height - 1.6, fit(text.flagLegend, l.width - 7, type.tiny.sizeMm), { ...type.tiny, color: 'ink' });
+  }
 
   const n = f.notes;
   ctx.text(n.x, n.y + 2.9, text.printNote, { ...type.label, weight: 'bold' });

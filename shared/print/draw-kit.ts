@@ -11,6 +11,7 @@ export function drawKitSheet(ctx: DrawingContext, sheet: Sheet, imposition: Impo
   const flagged = new Set(layout.findings.filter((f) => f.severity !== 'note').flatMap((f) => f.holeIds));
   const names: string[] = [];
   const legend = new Map<string, LegendRow>();
+  let flaggedOnSheet = false;
   for (const placement of sheet.placements) {
     const piece = layout.pieces.find((p) => p.id === placement.pieceId);
     if (!piece) continue;
@@ -19,13 +20,14 @@ export function drawKitSheet(ctx: DrawingContext, sheet: Sheet, imposition: Impo
     else drawDisc(ctx, piece, placement, layout, text, flagged);
     for (const hole of layout.holes) {
       if (hole.pieceId !== piece.id || !ownsHole(placement, hole.xMm)) continue;
+      if (flagged.has(hole.id)) flaggedOnSheet = true;
       const row = legend.get(hole.drillId);
       if (row) row.count++;
       else legend.set(hole.drillId, { hole, count: 1 });
     }
   }
   const rows = [...legend.values()].sort((a, b) => b.hole.diameterMm - a.hole.diameterMm);
-  drawFurniture(ctx, sheet, imposition.sheets.length, names.join(', '), rows, info, text);
+  drawFurniture(ctx, sheet, imposition.sheets.length, names.join(', '), rows, { ...info, flaggedOnSheet }, text);
 }
 
 /**

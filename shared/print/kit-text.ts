@@ -13,6 +13,8 @@ export interface KitText {
   tapeTab: string;
   /** Over an intake collar's scale. */
   collarScale: string;
+  /** Beside the flag triangle in a sheet's drill legend. */
+  flagLegend: string;
   cutOut: string;
   cutOpening: string;
   indexMark: string;
@@ -32,6 +34,7 @@ export function kitText(units: UnitSystem): KitText {
     topEdge: 'Top edge: level with the rim of the can',
     tapeTab: 'Tape over the start',
     collarScale: 'Intake: turn until the shell’s seam sits under a mark',
+    flagLegend: 'a check flagged this hole: see the build sheet',
     cutOut: 'Cut on this line',
     cutOpening: 'Cut out the opening',
     indexMark: 'Line up with the seam',

@@ -44,6 +44,19 @@ export function BuildSheetView({ content }: { content: BuildSheetContent }) {
           </tbody>
         ))}
       </table>
+      <h3 className="mt-4 font-semibold">Checks still open</h3>
+      <p className="mt-1">{content.airflow}</p>
+      {content.openChecks.length === 0 ? (
+        <p className="mt-1">None: every check passed.</p>
+      ) : (
+        <ul className="mt-1 list-disc space-y-1 pl-5">
+          {content.openChecks.map((check, i) => (
+            <li key={i}>
+              <span className="font-medium">{check.severity === 'error' ? 'Error' : 'Warning'}:</span> {check.message}
+            </li>
+          ))}
+        </ul>
+      )}
       <h3 className="mt-4 font-semibold">Order of work</h3>
       <ol className="mt-1 list-decimal space-y-1 pl-5">
         {content.orderOfWork.map((step) => (
