@@ -66,16 +66,41 @@ export interface CollarRange {
  * hole with every shell hole it overlaps, both treated as circles on the unrolled shell wall.
  */
 export function collarOpenAreaMm2(shellHoles: Hole[], shellDiameterMm: number, turnDeg: number): number {
+  return overlapArea(holePairs(shellHoles, shellDiameterMm, Math.abs(turnDeg)), turnDeg);
+}
+
+/** A collar hole and a shell hole that may overlap: their angle apart (signed) and the lens radius. */
+interface HolePair {
+  apartDeg: number;
+  radiusMm: number;
+  limitMm: number;
+  mmPerDeg: number;
+}
+
+/**
+ * The pairs that can overlap for turns up to maxTurnDeg, found once: a hole meets only its
+ * neighbours, so each turn then costs a few lenses a hole, not every pair.
+ */
+function holePairs(shellHoles: Hole[], shellDiameterMm: number, maxTurnDeg: number): HolePair[] {
   const mmPerDeg = (Math.PI * shellDiameterMm) / 360;
-  let total = 0;
+  const pairs: HolePair[] = [];
   for (const collarHole of shellHoles) {
-    const at = collarHole.angleDeg + turnDeg;
     for (const shellHole of shellHoles) {
-      let apart = Math.abs(normalizeDeg(at - shellHole.angleDeg));
-      if (apart > 180) apart = 360 - apart;
-      const s = apart * mmPerDeg;
-      if (s < shellHole.diameterMm) total += lensAreaMm2(shellHole.diameterMm / 2, s);
+      let apartDeg = normalizeDeg(collarHole.angleDeg - shellHole.angleDeg);
+      if (apartDeg > 180) apartDeg -= 360;
+      if ((Math.abs(apartDeg) - maxTurnDeg) * mmPerDeg < shellHole.diameterMm) pairs.push({ apartDeg, radiusMm: shellHole.diameterMm / 2, limitMm: shellHole.diameterMm, mmPerDeg });
     }
+  }
+  return pairs;
+}
+
+function overlapArea(pairs: HolePair[], turnDeg: number): number {
+  let total = 0;
+  for (const pair of pairs) {
+    let apart = Math.abs(pair.apartDeg + turnDeg) % 360;
+    if (apart > 180) apart = 360 - apart;
+    const s = apart * pair.mmPerDeg;
+    if (s < pair.limitMm) total += lensAreaMm2(pair.radiusMm, s);
   }
   return total;
 }
@@ -90,7 +115,9 @@ const SCALE_FRACTIONS: [number, string][] = [
 export function collarRange(partId: string, shellPartId: string, shellHoles: Hole[], shellDiameterMm: number): CollarRange {
   const fullAreaMm2 = shellHoles.reduce((sum, h) => sum + holeAreaMm2(h.diameterMm), 0);
   const mmPerDeg = (Math.PI * shellDiameterMm) / 360;
-  const area = (turnDeg: number) => collarOpenAreaMm2(shellHoles, shellDiameterMm, turnDeg);
+  const widestDeg = Math.max(0, ...shellHoles.map((h) => h.diameterMm)) / mmPerDeg;
+  const pairs = holePairs(shellHoles, shellDiameterMm, widestDeg);
+  const area = (turnDeg: number) => overlapArea(pairs, turnDeg);
   const setting = (label: string, turnDeg: number): CollarSetting => {
     const openAreaMm2 = area(turnDeg);
     return { label, turnDeg, offsetMm: turnDeg * mmPerDeg, openAreaMm2, fraction: fullAreaMm2 > 0 ? openAreaMm2 / fullAreaMm2 : 0 };
@@ -100,8 +127,7 @@ export function collarRange(partId: string, shellPartId: string, shellHoles: Hol
   // Turning one hole-width closes a lone hole; neighbours may open again before that. Find the least
   // open turn in the first hole-width by sampling, then each scale mark by bisection before it
   // (the area only falls from fully open to the least).
-  const widestDeg = Math.max(...shellHoles.map((h) => h.diameterMm)) / mmPerDeg;
-  const steps = 200;
+  const steps = 64;
   let leastDeg = 0;
   let leastArea = fullAreaMm2;
   for (let i = 1; i <= steps; i++) {
