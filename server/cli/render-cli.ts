@@ -7,11 +7,11 @@ import { renderHoleCsv, renderKitPdf, renderKitSvg, type RenderRequest } from '.
 
 /**
  * npm run render -- <design.json> [--paper letter|legal|tabloid|a4|a3] [--orientation portrait|landscape]
- *                   [--format pdf|svg|csv] [-o out] [--printer-x 151.2 --printer-y 199.4]
+ *                   [--format pdf|svg|csv] [-o out] [--printer-x 151.2 --printer-y 199.4 [--printer-name "Office laser"]]
  * Writes the kit for batch use: a PDF, one SVG per sheet (out-sheet-N.svg), or the hole table.
  */
 const usage =
-  'Usage: npm run render -- <design.json> [--paper letter|legal|tabloid|a4|a3] [--orientation portrait|landscape] [--format pdf|svg|csv] [-o file] [--printer-x mm --printer-y mm]';
+  'Usage: npm run render -- <design.json> [--paper letter|legal|tabloid|a4|a3] [--orientation portrait|landscape] [--format pdf|svg|csv] [-o file] [--printer-x mm --printer-y mm [--printer-name name]]';
 
 async function main(): Promise<number> {
   let args;
@@ -24,6 +24,7 @@ async function main(): Promise<number> {
         format: { type: 'string', short: 'f', default: 'pdf' },
         out: { type: 'string', short: 'o' },
         'printer-x': { type: 'string' },
+        'printer-name': { type: 'string' },
         'printer-y': { type: 'string' },
         help: { type: 'boolean', short: 'h' },
       },
@@ -44,7 +45,8 @@ async function main(): Promise<number> {
     console.error(`Cannot read ${file} as JSON: ${(error as Error).message}`);
     return 1;
   }
-  const printer = values['printer-x'] && values['printer-y'] ? { measuredXMm: Number(values['printer-x']), measuredYMm: Number(values['printer-y']) } : undefined;
+  const printer =
+    values['printer-x'] && values['printer-y'] ? { measuredXMm: Number(values['printer-x']), measuredYMm: Number(values['printer-y']), ...(values['printer-name'] ? { name: values['printer-name'] } : {}) } : undefined;
   const request = { design, print: { paper: values.paper, orientation: values.orientation }, printer } as RenderRequest;
   const out = values.out ?? file.replace(/\.json$/i, '') + (values.format === 'csv' ? '-holes.csv' : values.format === 'pdf' ? '-kit.pdf' : '');
   try {

@@ -25,7 +25,7 @@ export function renderRoutes(pool: RenderPool): Router {
   router.post('/pdf', async (req, res) => {
     const result = await pool.run({ kind: 'pdf', request: parseInput(renderRequestSchema, req.body) }, abandonedWith(res));
     if (result.kind !== 'pdf') return;
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Sheet-Count': String(result.sheets), 'Cache-Control': 'no-store' });
+    res.attachment(result.fileName).set({ 'Content-Type': 'application/pdf', 'X-Sheet-Count': String(result.sheets), 'Cache-Control': 'no-store' });
     res.end(Buffer.from(result.bytes));
   });
 
@@ -34,14 +34,14 @@ export function renderRoutes(pool: RenderPool): Router {
     const { sheet } = parseInput(sheetQuerySchema, req.query);
     const result = await pool.run({ kind: 'svg', request, sheet }, abandonedWith(res));
     if (result.kind !== 'svg') return;
-    res.set({ 'Content-Type': 'image/svg+xml; charset=utf-8', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Sheet-Count': String(result.sheets) });
+    res.attachment(result.fileName).set({ 'Content-Type': 'image/svg+xml; charset=utf-8', 'X-Sheet-Count': String(result.sheets) });
     res.send(result.svg);
   });
 
   router.post('/holes.csv', async (req, res) => {
     const result = await pool.run({ kind: 'csv', request: parseInput(renderRequestSchema, req.body) }, abandonedWith(res));
     if (result.kind !== 'csv') return;
-    res.set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${result.fileName}"` });
+    res.attachment(result.fileName).set({ 'Content-Type': 'text/csv; charset=utf-8' });
     res.send(result.csv);
   });
 
@@ -49,7 +49,7 @@ export function renderRoutes(pool: RenderPool): Router {
     const options = printOptionsSchema.parse(parseInput(calibrationQuerySchema, req.query));
     const result = await pool.run({ kind: 'calibration', options }, abandonedWith(res));
     if (result.kind !== 'calibration') return;
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"` });
+    res.attachment(result.fileName).set({ 'Content-Type': 'application/pdf' });
     res.end(Buffer.from(result.bytes));
   });
   return router;

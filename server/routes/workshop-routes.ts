@@ -61,14 +61,14 @@ export function workshopRoutes(workshops: WorkshopUseCases, pool: RenderPool): R
     if (pool.full) throw busy();
     const { paper } = parseInput(kitQuerySchema, req.query);
     const result = await workshops.kitPdf(viewer(res), req.params.id as string, paper, abandonedWith(res));
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Sheet-Count': String(result.sheets), 'Cache-Control': 'private, no-store' });
+    res.attachment(result.fileName).set({ 'Content-Type': 'application/pdf', 'X-Sheet-Count': String(result.sheets), 'Cache-Control': 'private, no-store' });
     res.end(Buffer.from(result.bytes));
   });
   router.get('/:id/class-pack.pdf', requireUser, async (req, res) => {
     if (pool.full) throw busy();
     const query = parseInput(classPackQuerySchema, req.query);
     const result = await workshops.classPack(viewer(res), req.params.id as string, query, abandonedWith(res));
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${result.fileName}"`, 'X-Page-Count': String(result.pages), 'Cache-Control': 'private, no-store' });
+    res.attachment(result.fileName).set({ 'Content-Type': 'application/pdf', 'X-Page-Count': String(result.pages), 'Cache-Control': 'private, no-store' });
     res.end(Buffer.from(result.bytes));
   });
   router.post('/:id/send-kit', requireUser, async (req, res) => {

@@ -174,9 +174,9 @@ export function createWorkshopRepository(db: Db) {
     },
 
     /** The person's default printer profile (or newest), for a kit printed for them. */
-    async printerOf(userId: string): Promise<{ measuredXMm: number; measuredYMm: number } | undefined> {
+    async printerOf(userId: string): Promise<{ name: string; measuredXMm: number; measuredYMm: number } | undefined> {
       const [row] = await db
-        .select({ measuredXMm: printerProfiles.measuredXMm, measuredYMm: printerProfiles.measuredYMm })
+        .select({ name: printerProfiles.name, measuredXMm: printerProfiles.measuredXMm, measuredYMm: printerProfiles.measuredYMm })
         .from(printerProfiles)
         .where(eq(printerProfiles.userId, userId))
         .orderBy(desc(printerProfiles.isDefault), desc(printerProfiles.updatedAt))

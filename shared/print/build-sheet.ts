@@ -1,12 +1,13 @@
 import type { Design } from '../design/design-schema.ts';
-import { nameSource } from '../design/name-source.ts';
+import { describeNumberRange, numberHoles } from '../layout/hole-numbers.ts';
 import type { Layout } from '../layout/layout-types.ts';
 import { describeDrill, describeLength, type KitText } from './kit-text.ts';
 
 /** The order of work for every hole (common practice, no source). */
 export const ORDER_OF_WORK = [
   'Check the print: the rulers measure 100 mm and 4 in. If not, print again at 100 % or calibrate the printer.',
-  'Cut out the strips and discs. Tape each strip round its can, its edge level with the can bottom (or rim), starting at the seam; tape the tab over the start.',
+  'Cut out the strips and discs; join a strip printed in parts at its letters (see the sheet map). Tape each strip round its can, the edge marked on it level with the can bottom (or rim), starting at the seam; tape the tab over the start.',
+  'Wrap check: pulled snug, the strip’s start edge meets the 0 tick at the end line. If it meets another tick, the can is that much wider (+) or narrower (−) across than the design says: measure the can and change the design before you drill.',
   'Centre-punch every hole through the dot in its crosshair. Take the paper off.',
   'Clamp the can (a wooden block or dowel inside stops the wall denting). Drill each pilot hole, then the final size.',
   'Deburr inside and out with a larger bit turned by hand or a file. Wash off oil and burn off any coating outdoors before first use.',
@@ -25,6 +26,8 @@ export interface BuildSheetHoleGroup {
   /** The row or pattern the holes come from ("Secondary jets"). */
   label: string;
   count: number;
+  /** The hole numbers on the templates and in the CSV: "25–48". */
+  numbers: string;
   /** "3/16 in (4.76 mm)", in the design's units first. */
   drill: string;
   pilot?: string;
@@ -47,24 +50,13 @@ export interface BuildSheetContent {
  * work and the safety notes. The PDF draws it; the print screen shows the same words as a page.
  */
 export function buildSheetContent(design: Design, layout: Layout, pilots: ReadonlyMap<string, string>, text: Pick<KitText, 'units'>): BuildSheetContent {
-  const partOf = new Map(layout.pieces.map((p) => [p.id, p.partId]));
   return {
     title: `${design.name}: build sheet`,
     materials: design.parts.map((part) => ({
       part: part.name ?? part.role,
       text: `${part.vessel.name}, ${describeLength(part.vessel.outerDiameterMm, text)} across, ${describeLength(part.vessel.heightMm, text)} tall`,
     })),
-    holes: design.parts.flatMap((part) => {
-      const bySource = new Map<string, Layout['holes']>();
-      for (const hole of layout.holes) if (partOf.get(hole.pieceId) === part.id) bySource.set(hole.sourceId, [...(bySource.get(hole.sourceId) ?? []), hole]);
-      if (bySource.size === 0) return [];
-      const groups = [...bySource].map(([sourceId, group]): BuildSheetHoleGroup => {
-        const first = group[0]!;
-        const pilot = pilots.get(first.drillId);
-        return { label: nameSource(design, sourceId), count: group.length, drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
-      });
-      return [{ part: part.name ?? part.role, groups }];
-    }),
+    holes: listHoleGroups(design, layout, pilots, text),
     airflow: describeAirflow(layout),
     openChecks: layout.findings.flatMap((f) => (f.severity === 'note' ? [] : [{ severity: f.severity, message: f.message }])),
     orderOfWork: ORDER_OF_WORK,
@@ -78,4 +70,34 @@ export function describeAirflow(layout: Pick<Layout, 'airflow'>): string {
   const areas = `${Math.round(primaryAreaMm2).toLocaleString('en-US')} mm² : ${Math.round(secondaryAreaMm2).toLocaleString('en-US')} mm²`;
   if (ratio === null) return `Primary : secondary open area: no secondary holes (target ${targetRatio} : 1); primary ${Math.round(primaryAreaMm2).toLocaleString('en-US')} mm².`;
   return `Primary : secondary open area ${Math.round(ratio * 10) / 10} : 1 (target ${targetRatio} : 1): ${areas}.`;
+}
+
+/**
+ * The holes part by part in the order of work (inner parts first), a group per row of each piece,
+ * with the hole numbers the templates and the CSV carry.
+ */
+function listHoleGroups(design: Design, layout: Layout, pilots: ReadonlyMap<string, string>, text: Pick<KitText, 'units'>): BuildSheetContent['holes'] {
+  const partOf = new Map(layout.pieces.map((p) => [p.id, p.partId]));
+  const parts = new Map<string, Map<string, { label: string; holes: Layout['holes']; numbers: number[] }>>();
+  for (const { hole, number, rowName } of numberHoles(layout)) {
+    const partId = partOf.get(hole.pieceId) ?? hole.pieceId;
+    let groups = parts.get(partId);
+    if (!groups) parts.set(partId, (groups = new Map()));
+    const key = `${hole.pieceId}\u0000${hole.sourceId}`;
+    let group = groups.get(key);
+    if (!group) groups.set(key, (group = { label: rowName, holes: [], numbers: [] }));
+    group.holes.push(hole);
+    group.numbers.push(number);
+  }
+  return [...parts].map(([partId, groups]) => {
+    const part = design.parts.find((p) => p.id === partId);
+    return {
+      part: part ? (part.name ?? part.role) : partId,
+      groups: [...groups.values()].map(({ label, holes, numbers }): BuildSheetHoleGroup => {
+        const first = holes[0]!;
+        const pilot = pilots.get(first.drillId);
+        return { label, count: holes.length, numbers: describeNumberRange(numbers), drill: describeDrill(first, text), ...(pilot ? { pilot } : {}) };
+      }),
+    };
+  });
 }

@@ -12,7 +12,7 @@ export function drawBuildSheet(ctx: DrawingContext, content: BuildSheetContent, 
   write.heading('Holes');
   for (const part of content.holes) {
     write.line(part.part, { ...type.label, weight: 'bold' });
-    for (const g of part.groups) write.line(`• ${g.label}: ${g.count} × ${g.drill}${g.pilot ? `, pilot ${g.pilot}` : ''}`, type.label, 3);
+    for (const g of part.groups) write.line(`• ${g.label} (holes ${g.numbers}): ${g.count} × ${g.drill}${g.pilot ? `, pilot ${g.pilot}` : ''}`, type.label, 3);
   }
 
   write.heading('Checks still open');

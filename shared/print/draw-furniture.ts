@@ -14,6 +14,8 @@ export interface KitInfo {
   date: string;
   /** Drill label -> pilot drill label, where a pilot is advised. */
   pilots: Map<string, string>;
+  /** The printer profile the kit is scaled for, in words (kit-text.ts scaledFor). */
+  printer: string;
   /** Set per sheet by drawKitSheet: the sheet shows a hole a check flagged, so its legend explains the mark. */
   flaggedOnSheet?: boolean;
 }
@@ -35,8 +37,9 @@ export function drawFurniture(ctx: DrawingContext, sheet: Sheet, sheetCount: num
   const titleLines: [string, TextStyle][] = [
     [fit(info.designName, t.width - 3, type.title.sizeMm), type.title],
     [fit(parts, t.width - 3, type.label.sizeMm), type.label],
-    [`Version ${info.version} · ${info.date}`, type.small],
-    [`${text.sheet(sheet.number, sheetCount)} · units: ${text.units === 'in' ? 'inches' : 'millimetres'}`, type.small],
+    [`Version ${info.version} · ${info.date} · ${text.sheet(sheet.number, sheetCount)} · ${text.units === 'in' ? 'inches' : 'millimetres'}`, type.small],
+    // The printer profile the kit is scaled for, on every sheet.
+    [fit(info.printer, t.width - 3, type.small.sizeMm), { ...type.small, color: 'ink' }],
   ];
   titleLines.forEach(([line, style], i) => ctx.text(t.x + 1.5, t.y + 4.5 + i * 5.2, line, style));
 

@@ -7,7 +7,7 @@ import type { Imposition, Placement, Sheet } from './imposition-types.ts';
 import type { KitText } from './kit-text.ts';
 
 /** Draws one sheet of a kit: its pieces (or tiles of them) and its furniture. */
-export function drawKitSheet(ctx: DrawingContext, sheet: Sheet, imposition: Imposition, layout: Layout, info: KitInfo, text: KitText): void {
+export function drawKitSheet(ctx: DrawingContext, sheet: Sheet, imposition: Imposition, layout: Layout, info: KitInfo, text: KitText, numbers: ReadonlyMap<string, number>): void {
   const flagged = new Set(layout.findings.filter((f) => f.severity !== 'note').flatMap((f) => f.holeIds));
   const names: string[] = [];
   const legend = new Map<string, LegendRow>();
@@ -16,8 +16,8 @@ export function drawKitSheet(ctx: DrawingContext, sheet: Sheet, imposition: Impo
     const piece = layout.pieces.find((p) => p.id === placement.pieceId);
     if (!piece) continue;
     if (!names.includes(piece.name)) names.push(piece.name);
-    if (piece.kind === 'wrap-strip') drawStrip(ctx, piece, placement, layout, text, flagged);
-    else drawDisc(ctx, piece, placement, layout, text, flagged);
+    if (piece.kind === 'wrap-strip') drawStrip(ctx, piece, placement, layout, text, flagged, numbers);
+    else drawDisc(ctx, piece, placement, layout, text, flagged, numbers);
     for (const hole of layout.holes) {
       if (hole.pieceId !== piece.id || !ownsHole(placement, hole.xMm)) continue;
       if (flagged.has(hole.id)) flaggedOnSheet = true;

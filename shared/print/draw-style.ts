@@ -18,3 +18,6 @@ export const type = {
   small: { sizeMm: 2.4, color: 'soft' },
   tiny: { sizeMm: 2.0, color: 'soft' },
 } satisfies Record<string, TextStyle>;
+
+/** Hole numbers: small upright digits in ink, readable at arm's length (common practice, no source). */
+export const HOLE_NUMBER_SIZE_MM = 2;

@@ -1,3 +1,4 @@
+import { orderPieces } from '../layout/hole-numbers.ts';
 import type { Piece } from '../layout/layout-types.ts';
 import { findFitProblem, LABEL_BAND_MM, measurePiece, stripSideMm } from './footprint.ts';
 import { layoutFurniture } from './furniture.ts';
@@ -31,7 +32,7 @@ interface Footprint {
 
 /**
  * Puts the pieces of a layout on as few sheets as fit, tiling strips longer than the content is
- * wide. Throws ImpositionError if a piece cannot fit a sheet on its own or the kit needs more
+ * wide, and numbers the sheets in build order (inner parts first). Throws ImpositionError if a piece cannot fit a sheet on its own or the kit needs more
  * than MAX_SHEETS sheets.
  */
 export function imposePieces(pieces: readonly Piece[], options: PrintOptions): Imposition {
@@ -58,9 +59,19 @@ function planImposition(pieces: readonly Piece[], options: PrintOptions): { impo
   const tooMany = `The kit needs more than ${MAX_SHEETS} sheets of ${where}; choose larger paper.`;
   if (pieces.some((piece) => countSheetsAtLeast(piece, content) > MAX_SHEETS)) return { problems: [tooMany] };
 
-  const footprints = pieces.flatMap((piece) => cutFootprints(piece, content.width));
+  // Footprints in build order (inner parts first), each strip's tiles in order.
+  const footprints = orderPieces(pieces).flatMap((piece) => cutFootprints(piece, content.width));
   const { packed, binCount } = packShelves(footprints, content.width, content.height, PLACEMENT_GAP_MM);
   if (binCount > MAX_SHEETS) return { problems: [tooMany] };
+
+  // The packer fills sheets tallest piece first; the kit is numbered in build order instead: a
+  // sheet comes as early as the earliest footprint it holds, so inner parts come first and a
+  // strip's tiles keep their order.
+  const firstOnBin = new Array<number>(binCount).fill(Infinity);
+  packed.forEach((spot, i) => (firstOnBin[spot.bin] = Math.min(firstOnBin[spot.bin]!, i)));
+  const binOrder = firstOnBin.map((first, bin) => ({ first, bin })).sort((a, b) => a.first - b.first);
+  const sheetOfBin = new Array<number>(binCount);
+  binOrder.forEach(({ bin }, i) => (sheetOfBin[bin] = i));
 
   const sheets: Sheet[] = Array.from({ length: binCount }, (_, i) => {
     const { furniture, content: sheetContent } = layoutFurniture(widthMm, heightMm, opts.marginMm);
@@ -69,7 +80,7 @@ function planImposition(pieces: readonly Piece[], options: PrintOptions): { impo
   footprints.forEach((footprint, i) => {
     const spot = packed[i]!;
     const rect = { x: content.x + spot.x, y: content.y + spot.y, width: footprint.width, height: footprint.height };
-    sheets[spot.bin]!.placements.push(placeFootprint(footprint, rect));
+    sheets[sheetOfBin[spot.bin]!]!.placements.push(placeFootprint(footprint, rect));
   });
   return { imposition: { sheets } };
 }

@@ -1,4 +1,5 @@
 import type { Hole } from '../layout/layout-types.ts';
+import { printableOrReplaced } from './printable-text.ts';
 import { formatInches, formatMm } from '../units/index.ts';
 import type { UnitSystem } from '../units/length.ts';
 
@@ -18,6 +19,17 @@ export interface KitText {
   cutOut: string;
   cutOpening: string;
   indexMark: string;
+  /** Over the arrow in a strip's label band. */
+  wayUp: string;
+  /** Beside the wrap check's ticks, under the strip. */
+  wrapCheck: string;
+  /** Under a strip: its length and the can it was made for. */
+  stripLength(length: string, diameter: string, circumference: string): string;
+  stripLengthShort(length: string, diameter: string): string;
+  /** Which printer profile the kit was scaled for, on every sheet. */
+  scaledFor(printer?: { name?: string | undefined; scaleX: number; scaleY: number }): string;
+  /** "holes 25–48", after a row's label. */
+  holeNumbers(range: string): string;
   tile(n: number, of: number): string;
   join(letter: string): string;
   sheet(n: number, of: number): string;
@@ -38,8 +50,20 @@ export function kitText(units: UnitSystem): KitText {
     cutOut: 'Cut on this line',
     cutOpening: 'Cut out the opening',
     indexMark: 'Line up with the seam',
+    wayUp: 'This way up, towards the rim',
+    wrapCheck: units === 'in' ? 'Wrap check: the start edge meets 0; a tick is 1/16 in across' : 'Wrap check: the start edge meets 0; a tick is 1 mm across',
+    stripLength: (length, diameter, circumference) => `Start line to end line ${length}: made for a can ${diameter} across, ${circumference} round`,
+    stripLengthShort: (length, diameter) => `${length} long, for a can ${diameter} across`,
+    holeNumbers: (range) => `holes ${range}`,
+    scaledFor: (printer) => {
+      if (!printer) return 'Printer: no profile, drawn at 100 %';
+      // Drawn 1 / scale of true size, so the printer's error brings it back to true.
+      const factor = (scale: number) => `${((1 / scale) * 100).toFixed(2)} %`;
+      const name = printer.name ? `“${printableOrReplaced(printer.name)}”` : 'measured';
+      return `Printer: ${name}, drawn ${factor(printer.scaleX)} × ${factor(printer.scaleY)}`;
+    },
     tile: (n, of) => `part ${n} of ${of}`,
-    join: (letter) => `join ${letter} to ${letter}`,
+    join: (letter) => `${letter} onto ${letter}`,
     sheet: (n, of) => `Sheet ${n} of ${of}`,
   };
 }

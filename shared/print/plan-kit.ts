@@ -1,6 +1,7 @@
 import type { Design } from '../design/design-schema.ts';
 import type { DrawingContext } from '../drawing/drawing-context.ts';
 import { allDrills, commonDrillSets, resolveDrillSet, suggestPilot } from '../drills/index.ts';
+import { numberHoles } from '../layout/hole-numbers.ts';
 import type { Layout } from '../layout/layout-types.ts';
 import { buildSheetContent, type BuildSheetContent } from './build-sheet.ts';
 import { drawBuildSheet } from './draw-build-sheet.ts';
@@ -10,11 +11,14 @@ import { checkImposable, imposePieces, ImpositionError } from './impose.ts';
 import type { Imposition } from './imposition-types.ts';
 import type { PrintOptions } from './paper.ts';
 import { kitText } from './kit-text.ts';
+import { drawSheetMap, sheetMapContent, type SheetMapContent } from './sheet-map.ts';
 
 /** How one printer mis-scales, measured from its calibration sheet: 1.015 = prints 1.5 % long. */
 export interface PrinterScale {
   scaleX: number;
   scaleY: number;
+  /** The profile's name, printed on every sheet. */
+  name?: string | undefined;
 }
 
 export interface KitPlan {
@@ -28,6 +32,10 @@ export interface KitPlan {
   /** What each sheet holds, in words: "Outer shell, wall (part 1 of 3)". */
   sheetContents: string[];
   drawBuildSheet(ctx: DrawingContext, page: { widthMm: number; marginMm: number }): void;
+  /** Which sheet holds which piece and how tiles join, printed after the templates. */
+  sheetMap: SheetMapContent;
+  /** Draws the sheet map from item `from`; answers where a next page carries on (see drawSheetMap). */
+  drawSheetMap(ctx: DrawingContext, page: { widthMm: number; heightMm: number; marginMm: number }, from?: number): number;
 }
 
 /**
@@ -36,26 +44,34 @@ export interface KitPlan {
  */
 export function planKit(design: Design, layout: Layout, options: PrintOptions, meta: { version: string; date: string; printer?: PrinterScale }): KitPlan {
   const imposition = imposePieces(layout.pieces, options);
-  const info: KitInfo = { designName: design.name, version: meta.version, date: meta.date, pilots: pilotsFor(design, layout) };
   const text = kitText(design.units);
+  const info: KitInfo = { designName: design.name, version: meta.version, date: meta.date, pilots: pilotsFor(design, layout), printer: text.scaledFor(meta.printer) };
   const buildSheet = buildSheetContent(design, layout, info.pilots, text);
+  // One numbering for the whole kit: the templates, the build sheet and the CSV agree.
+  const numbers = new Map(numberHoles(layout).map(({ hole, number }) => [hole.id, number]));
+  const sheetContents = imposition.sheets.map((sheet) =>
+    sheet.placements
+      .map((p) => {
+        const name = layout.pieces.find((piece) => piece.id === p.pieceId)?.name ?? p.pieceId;
+        return p.tile ? `${name} (${text.tile(p.tile.number, p.tile.count)})` : name;
+      })
+      .join('; '),
+  );
+  const sheetMap = sheetMapContent(design, layout, imposition, text);
   return {
     imposition,
     info,
     transform: compensate(meta.printer),
     buildSheet,
-    sheetContents: imposition.sheets.map((sheet) =>
-      sheet.placements
-        .map((p) => {
-          const name = layout.pieces.find((piece) => piece.id === p.pieceId)?.name ?? p.pieceId;
-          return p.tile ? `${name} (${text.tile(p.tile.number, p.tile.count)})` : name;
-        })
-        .join('; '),
-    ),
+    sheetContents,
+    sheetMap,
+    drawSheetMap(ctx, page, from = 0) {
+      return drawSheetMap(ctx, sheetMap, page, from);
+    },
     drawSheet(index, ctx) {
       const sheet = imposition.sheets[index];
       if (!sheet) throw new RangeError(`No sheet ${index + 1} in this kit`);
-      drawKitSheet(ctx, sheet, imposition, layout, info, text);
+      drawKitSheet(ctx, sheet, imposition, layout, info, text, numbers);
     },
     drawBuildSheet(ctx, page) {
       drawBuildSheet(ctx, buildSheet, page);

@@ -70,3 +70,16 @@ export function describeUnprintable(text: string, options: PrintableOptions = {}
   if (chars.length === 0) return undefined;
   return `has ${chars.length === 1 ? 'a character' : 'characters'} the printed kit cannot show: ${listCharacters(chars)}. Use letters, digits and common punctuation.`;
 }
+
+/** A zod refinement for one-line text that prints on a kit: refuses it naming the characters. */
+export function refinePrintable(text: string, ctx: { addIssue(issue: { code: 'custom'; message: string }): void }): void {
+  const message = describeUnprintable(text);
+  if (message) ctx.addIssue({ code: 'custom', message });
+}
+
+/** Text as the kit can print it: any character the fonts lack becomes "?" (for data saved before the check). */
+export function printableOrReplaced(text: string): string {
+  let out = '';
+  for (const char of text) out += isPrintableCharacter(char) ? char : '?';
+  return out;
+}

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CALIBRATION_X_MM, CALIBRATION_Y_MM } from './draw-calibration.ts';
+import { refinePrintable } from './printable-text.ts';
 import type { PrinterScale } from './plan-kit.ts';
 
 /**
@@ -7,7 +8,8 @@ import type { PrinterScale } from './plan-kit.ts';
  * 150 mm ruler as 152.25 mm is 1.5 % long in X; kits are then drawn 1/1.015 as long.
  */
 export const printerProfileInputSchema = z.object({
-  name: z.string().trim().min(1).max(80),
+  // The name prints on every sheet of a kit scaled for this printer.
+  name: z.string().trim().min(1).max(80).superRefine(refinePrintable),
   measuredXMm: z.number().min(CALIBRATION_X_MM * 0.9).max(CALIBRATION_X_MM * 1.1),
   measuredYMm: z.number().min(CALIBRATION_Y_MM * 0.9).max(CALIBRATION_Y_MM * 1.1),
 });

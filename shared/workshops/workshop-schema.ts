@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { describeUnprintable } from '../print/printable-text.ts';
+import { refinePrintable } from '../print/printable-text.ts';
 import { paperPreferenceSchema } from '../account/preferences.ts';
 import { burnSchema } from '../burns/burn-schema.ts';
 import { designSummarySchema } from '../library/library-schemas.ts';
@@ -21,10 +21,7 @@ export const INVITATIONS_PER_REQUEST_MAX = 200;
 export const INVITATION_DAYS = 14;
 
 /** The title and place print on the class pack's cover: only characters its fonts carry (shared/print/printable-text.ts). */
-const printable = (text: string, ctx: z.RefinementCtx) => {
-  const message = describeUnprintable(text);
-  if (message) ctx.addIssue({ code: 'custom', message });
-};
+const printable = refinePrintable;
 const title = z.string().trim().min(1).max(WORKSHOP_TITLE_MAX).superRefine(printable);
 const place = z.string().trim().max(WORKSHOP_PLACE_MAX).superRefine(printable);
 const notes = z.string().trim().max(WORKSHOP_NOTES_MAX);

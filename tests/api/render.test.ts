@@ -20,6 +20,16 @@ async function post(path: string, body: unknown) {
 }
 
 describe('POST /api/render/pdf', () => {
+  it('names the design and the printer profile in the file name, other scripts sent as RFC 6266 filename*', async () => {
+    const design = { ...pint, name: 'Śliwka Ζήτα Жаровня' };
+    const response = await post('/api/render/pdf', { design, print: { paper: 'letter' }, printer: { name: 'Hall laser', measuredXMm: 152.25, measuredYMm: 198.6 } });
+    expect(response.status).toBe(200);
+    const header = response.headers.get('content-disposition') ?? '';
+    // RFC 6266 section 4.3: an ASCII filename for old clients, the UTF-8 name in filename* (RFC 8187 percent-encoding).
+    expect(header).toMatch(/^attachment; filename="[^"]*-kit-for-hall-laser\.pdf"; filename\*=UTF-8''/);
+    expect(decodeURIComponent(/filename\*=UTF-8''(.+)$/.exec(header)![1]!)).toBe('sliwka-ζητα-жаровня-kit-for-hall-laser.pdf');
+  });
+
   it('returns a PDF whose pages are exactly A4 (ISO 216: 210 x 297 mm) with print scaling off, without sign-in', async () => {
     const response = await post('/api/render/pdf', { design: pint, print: { paper: 'a4' } });
     expect(response.status).toBe(200);
@@ -27,8 +37,10 @@ describe('POST /api/render/pdf', () => {
     const bytes = new Uint8Array(await response.arrayBuffer());
     expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-');
     const doc = await PDFDocument.load(bytes);
-    // The template sheets, then the build sheet.
-    expect(doc.getPageCount()).toBe(Number(response.headers.get('x-sheet-count')) + 1);
+    // The template sheets, then the sheet map (one page for this kit) and the build sheet.
+    expect(doc.getPageCount()).toBe(Number(response.headers.get('x-sheet-count')) + 2);
+    // The printer profile the kit is for goes in the file name (none here).
+    expect(response.headers.get('content-disposition')).toMatch(/^attachment; filename="?[a-z0-9-]+-kit-no-printer-profile\.pdf"?$/);
     for (const page of doc.getPages()) {
       expect(page.getMediaBox().width).toBeCloseTo(210 * PT_PER_MM, 2);
       expect(page.getMediaBox().height).toBeCloseTo(297 * PT_PER_MM, 2);
@@ -82,7 +94,7 @@ describe('POST /api/render/svg and /holes.csv, GET /api/render/calibration.pdf',
   it('returns the hole table as CSV', async () => {
     const response = await post('/api/render/holes.csv', { design: pint });
     expect(response.headers.get('content-type')).toContain('text/csv');
-    expect((await response.text()).split('\r\n')[0]).toBe('piece,group,index,x_mm,y_mm,diameter_mm,drill');
+    expect((await response.text()).split('\r\n')[0]).toBe('number,piece,group,index,x_mm,y_mm,diameter_mm,drill,piece_name,row');
   });
 
   it('returns the calibration sheet', async () => {

@@ -120,9 +120,9 @@ describe('a workshop from start to the group results', () => {
     expect(pack.status).toBe(200);
     expect(pack.headers.get('content-type')).toBe('application/pdf');
     const sheets = Number(kit.headers.get('x-sheet-count'));
-    // Cover + one sign-off page (two roster lines) + the kit's sheets + its build sheet.
-    expect((await PDFDocument.load(pack.bytes)).getPageCount()).toBe(sheets + 3);
-    expect(Number(pack.headers.get('x-page-count'))).toBe(sheets + 3);
+    // Cover + one sign-off page (two roster lines) + the kit's sheets, its sheet map and its build sheet.
+    expect((await PDFDocument.load(pack.bytes)).getPageCount()).toBe(sheets + 4);
+    expect(Number(pack.headers.get('x-page-count'))).toBe(sheets + 4);
     expect((await member.get(`/api/workshops/${workshopId}/class-pack.pdf`)).status).toBe(403);
     const refused = await instructor.get(`/api/workshops/${workshopId}/class-pack.pdf?builds=0`);
     expect(refused.status).toBe(400);

@@ -11,7 +11,7 @@ describe('npm run layout (CLI)', () => {
     const run = cli('templates/pint-can-stove.json', '--format', 'csv');
     expect(run.status).toBe(0);
     const lines = run.stdout.trimEnd().split('\r\n');
-    expect(lines[0]).toBe('piece,group,index,x_mm,y_mm,diameter_mm,drill');
+    expect(lines[0]).toBe('number,piece,group,index,x_mm,y_mm,diameter_mm,drill,piece_name,row');
     expect(lines).toHaveLength(76); // 16 jets + 16 low row + 29 bottom + 14 intake, and the header
   });
 

@@ -14,8 +14,8 @@ describe('the build sheet printed with every kit', () => {
     plan.drawBuildSheet(recording, { widthMm: 215.9, marginMm: 12.7 }); // ANSI Letter width
     const text = recording.calls.flatMap((c) => (c.op === 'text' ? [c.text] : [])).join('\n');
     expect(text).toContain('No. 303 food can (303x406)');
-    expect(text).toContain('Secondary jets: 16 × 3/16 in (4.76 mm), pilot 3/32 in');
-    expect(text).toContain('Primary rings: 29 × 1/4 in (6.35 mm), pilot 1/8 in');
+    expect(text).toContain('Secondary jets (holes 1–16): 16 × 3/16 in (4.76 mm), pilot 3/32 in');
+    expect(text).toMatch(/Primary rings \(holes \d+–\d+\): 29 × 1\/4 in \(6\.35 mm\), pilot 1\/8 in/);
     for (const words of [...ORDER_OF_WORK, ...SAFETY_NOTES].map((s) => s.split(' ').slice(0, 4).join(' '))) expect(text).toContain(words);
     const bounds = boundsOfCalls(recording.calls)!;
     expect(bounds.minX).toBeGreaterThanOrEqual(12.7 - 0.5);
@@ -28,7 +28,7 @@ describe('the build sheet printed with every kit', () => {
     const groups = plan.buildSheet.holes.flatMap((p) => p.groups);
     // Worked arithmetic from the example: 16 secondary jets + 29 primary holes = 45 holes.
     expect(groups.reduce((sum, g) => sum + g.count, 0)).toBe(layout.holes.length);
-    expect(groups).toContainEqual({ label: 'Secondary jets', count: 16, drill: '3/16 in (4.76 mm)', pilot: '3/32 in' });
+    expect(groups).toContainEqual({ label: 'Secondary jets', count: 16, numbers: '1–16', drill: '3/16 in (4.76 mm)', pilot: '3/32 in' });
     expect(plan.buildSheet.orderOfWork).toEqual(ORDER_OF_WORK);
     expect(plan.buildSheet.safety).toEqual(SAFETY_NOTES);
   });

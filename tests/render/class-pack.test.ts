@@ -79,9 +79,11 @@ describe('the class pack for a workshop', () => {
     const request = { design, print: { paper: 'letter' as const } };
     const kit = await renderKitPdf(request);
     const pack = await renderClassPackPdf(request, meta(3, ['Ada Example', 'ben@example.com', '']));
-    // Kit: its sheets plus the build sheet; the pack adds the cover and the sign-off page.
-    expect(pack.pages).toBe(kit.sheets + 3);
-    expect(await pageCount(pack.bytes)).toBe(kit.sheets + 3);
+    // Kit: its sheets, the sheet map and the build sheet; the pack adds the cover and the sign-off page.
+    expect(kit.pages).toBe(kit.sheets + 2);
+    expect(await pageCount(kit.bytes)).toBe(kit.pages);
+    expect(pack.pages).toBe(kit.pages + 2);
+    expect(await pageCount(pack.bytes)).toBe(kit.pages + 2);
     const pages = await readPdfText(pack.bytes);
     const kitPages = await readPdfText(kit.bytes);
     expect(pages[1]).toContain('Safety briefing');
@@ -101,7 +103,7 @@ describe('a class pack for a full workshop', () => {
     const kit = await renderKitPdf(request);
     const pack = await renderClassPackPdf(request, meta(200, roster));
     const pages = await readPdfText(pack.bytes);
-    const signOff = pages.slice(1, pack.pages - kit.sheets - 1);
+    const signOff = pages.slice(1, pack.pages - kit.pages);
     expect(signOff.length).toBeGreaterThan(1);
     expect(pages).toHaveLength(pack.pages);
     for (const name of roster) expect(signOff.filter((p) => p.includes(name)), name).toHaveLength(1);

@@ -56,9 +56,9 @@ export function locateHole(piece: Piece, placement: Placement, hole: Hole): [num
 }
 
 /** One piece as it prints: a white paper box under the kit's own drawing of the piece. */
-export function drawPieceView(ctx: DrawingContext, layout: Layout, piece: Piece, placement: Placement, text: KitText, flagged: Set<string>): void {
+export function drawPieceView(ctx: DrawingContext, layout: Layout, piece: Piece, placement: Placement, text: KitText, flagged: Set<string>, numbers?: ReadonlyMap<string, number>): void {
   const { x, y, width, height } = placement.rect;
   ctx.rect(x, y, width, height, { fill: 'paper' });
-  if (piece.kind === 'wrap-strip') drawStrip(ctx, piece, placement, layout, text, flagged);
-  else drawDisc(ctx, piece, placement, layout, text, flagged);
+  if (piece.kind === 'wrap-strip') drawStrip(ctx, piece, placement, layout, text, flagged, numbers);
+  else drawDisc(ctx, piece, placement, layout, text, flagged, numbers);
 }

@@ -8,6 +8,7 @@ import { drawSection, type SectionPlan } from '../../../shared/print/draw-sectio
 import { describeLength, type KitText } from '../../../shared/print/kit-text.ts';
 import type { PlacedPart } from '../../../shared/layout/assembly.ts';
 import { drawPieceView, flaggedHoleIds, locateHole, placeWholePiece } from './piece-view.ts';
+import { numberHoles } from '../../../shared/layout/hole-numbers.ts';
 
 export type PreviewView = 'wall' | 'bottom' | 'assembled';
 
@@ -59,7 +60,9 @@ export function planScene(layout: Layout, units: UnitSystem, view: PreviewView, 
   if (!piece) return { calls: [], bounds: { minX: 0, minY: 0, maxX: 100, maxY: 100 }, label: describeEmpty(view), pieceId: null };
   const name = nameOfPart(piece);
   const placement = placeWholePiece(piece);
-  drawPieceView(rec, layout, piece, placement, text, flagged);
+  // The same hole numbers as the printed kit, the build sheet and the CSV.
+  const numbers = new Map(numberHoles(layout).map(({ hole, number }) => [hole.id, number]));
+  drawPieceView(rec, layout, piece, placement, text, flagged, numbers);
   const holes = layout.holes.filter((h) => h.pieceId === piece.id);
   for (const hole of holes) if (highlight?.has(hole.id)) drawHalo(rec, ...locateHole(piece, placement, hole), hole.diameterMm);
   const band = /\((top|bottom) band\)$/.exec(piece.name)?.[0];

@@ -22,4 +22,4 @@ const messages: Record<string, string> = {
  * Plain messages for the shared printerProfileInputSchema, passed to the resolver per parse so
  * the form and the API check the very same rules. An empty number box arrives as NaN.
  */
-export const profileFormErrors: z.core.$ZodErrorMap = (issue) => messages[String(issue.path?.[0])];
+export const profileFormErrors: z.core.$ZodErrorMap = (issue) => (issue.code === 'custom' ? `The name ${issue.message}` : messages[String(issue.path?.[0])]);

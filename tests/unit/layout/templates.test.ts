@@ -25,9 +25,10 @@ describe('example designs in templates/', () => {
     if (!result.ok) throw new Error('pint-can-stove should be valid');
     const lines = formatHoleCsv(result.layout).trimEnd().split('\r\n');
     expect(lines[0]).toBe(HOLE_CSV_HEADER);
-    expect(HOLE_CSV_HEADER).toBe('piece,group,index,x_mm,y_mm,diameter_mm,drill');
+    expect(HOLE_CSV_HEADER).toBe('number,piece,group,index,x_mm,y_mm,diameter_mm,drill,piece_name,row');
     expect(lines).toHaveLength(result.layout.holes.length + 1);
-    expect(lines[1]).toMatch(/^chamber:wall,secondary,0,\d+\.\d{4},\d+\.\d{4},4\.7625,3\/16 in$/);
+    // Hole 1 is the first jet of the burn chamber: inner parts first, the rows in the layout's order.
+    expect(lines[1]).toMatch(/^1,chamber:wall,secondary,0,\d+\.\d{4},\d+\.\d{4},4\.7625,3\/16 in,"Burn chamber, wall",Secondary jets$/);
   });
 });
 

@@ -8,7 +8,8 @@ export type KitFormat = 'pdf' | 'svg' | 'csv';
 export interface KitRequest {
   design: DesignInput;
   print: PrintOptions;
-  printer?: Pick<PrinterProfileInput, 'measuredXMm' | 'measuredYMm'>;
+  /** The profile the kit is scaled for: its name prints on every sheet and goes in the file name. */
+  printer?: Pick<PrinterProfileInput, 'name' | 'measuredXMm' | 'measuredYMm'>;
   sheet?: number;
   /** Printed in each sheet's title block. */
   version?: string;
@@ -29,7 +30,7 @@ export async function downloadKit(format: KitFormat, request: KitRequest): Promi
     const body = (await response.json().catch(() => undefined)) as { error?: { code?: string; message?: string } } | undefined;
     throw new ApiError(response.status, body?.error?.code ?? 'HTTP', body?.error?.message ?? `The server answered ${response.status}.`);
   }
-  const fileName = /filename="([^"]+)"/.exec(response.headers.get('content-disposition') ?? '')?.[1] ?? `canwright.${format}`;
+  const fileName = fileNameOf(response.headers.get('content-disposition')) ?? `canwright.${format}`;
   const url = URL.createObjectURL(await response.blob());
   const link = Object.assign(document.createElement('a'), { href: url, download: fileName });
   document.body.append(link);
@@ -37,4 +38,20 @@ export async function downloadKit(format: KitFormat, request: KitRequest): Promi
   link.remove();
   setTimeout(() => URL.revokeObjectURL(url), 10_000);
   return { fileName, sheets: Number(response.headers.get('x-sheet-count') ?? 1) };
+}
+
+/** The file name of a Content-Disposition header: RFC 6266's UTF-8 filename* when given, else filename. */
+export function fileNameOf(header: string | null): string | undefined {
+  if (!header) return undefined;
+  const extended = /filename\*\s*=\s*UTF-8''([^;\s]+)/i.exec(header)?.[1];
+  if (extended) {
+    try {
+      return decodeURIComponent(extended);
+    } catch {
+      // A malformed escape: fall back to the plain name.
+    }
+  }
+  // Quoted, or a bare token when the name needs no quotes (RFC 6266, section 4.1).
+  const plain = /filename\s*=\s*(?:"([^"]+)"|([^;\s]+))/i.exec(header);
+  return plain?.[1] ?? plain?.[2];
 }

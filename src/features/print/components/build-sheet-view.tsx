@@ -21,6 +21,7 @@ export function BuildSheetView({ content }: { content: BuildSheetContent }) {
         <thead className="border-b border-rule text-xs text-ink-soft">
           <tr>
             <th scope="col" className="py-1 pr-3 font-medium">Holes</th>
+            <th scope="col" className="py-1 pr-3 font-medium">Numbers</th>
             <th scope="col" className="py-1 pr-3 text-right font-medium">Count</th>
             <th scope="col" className="py-1 pr-3 font-medium">Drill</th>
             <th scope="col" className="py-1 font-medium">Pilot</th>
@@ -29,13 +30,14 @@ export function BuildSheetView({ content }: { content: BuildSheetContent }) {
         {content.holes.map((part) => (
           <tbody key={part.part}>
             <tr>
-              <th scope="rowgroup" colSpan={4} className="pt-2 pb-0.5 font-medium">
+              <th scope="rowgroup" colSpan={5} className="pt-2 pb-0.5 font-medium">
                 {part.part}
               </th>
             </tr>
             {part.groups.map((g) => (
-              <tr key={g.label} className="border-b border-rule/60 align-top">
+              <tr key={g.numbers} className="border-b border-rule/60 align-top">
                 <td className="py-1 pr-3">{g.label}</td>
+                <td className="py-1 pr-3 tabular-nums whitespace-nowrap">{g.numbers}</td>
                 <td className="py-1 pr-3 text-right tabular-nums">{g.count}</td>
                 <td className="py-1 pr-3">{g.drill}</td>
                 <td className="py-1">{g.pilot ?? '—'}</td>

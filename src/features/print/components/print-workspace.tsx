@@ -57,10 +57,10 @@ export function PrintWorkspace({ design, savedId, version, checksLink }: { desig
     setBusy(true);
     setStatus(undefined);
     try {
-      const correction = printer.profile ? { measuredXMm: printer.profile.measuredXMm, measuredYMm: printer.profile.measuredYMm } : undefined;
+      const correction = printer.profile ? { name: printer.profile.name, measuredXMm: printer.profile.measuredXMm, measuredYMm: printer.profile.measuredYMm } : undefined;
       const { fileName, sheets } = await downloadKit(format, { design, print, printer: correction, sheet, version });
       if (format === 'pdf' && savedId && account) markPrinted.mutate(savedId);
-      setStatus({ tone: 'success', text: format === 'pdf' ? `Saved ${fileName} (${sheets} sheet${sheets === 1 ? '' : 's'} and the build sheet).` : `Saved ${fileName}.` });
+      setStatus({ tone: 'success', text: format === 'pdf' ? `Saved ${fileName} (${sheets} sheet${sheets === 1 ? '' : 's'}, the sheet map and the build sheet).` : `Saved ${fileName}.` });
     } catch (error) {
       setStatus({ tone: 'error', text: (error as Error).message });
     } finally {
