@@ -86,6 +86,13 @@ function findCrossFieldProblems(design: Design): DesignProblem[] {
     if (!findDrill(drillId)) problems.push({ path: `drillSet.drillIds.${d}`, message: `"${drillId}" is not a drill Canwright knows` });
   });
   design.parts.forEach((part, p) => {
+    // A collar's holes come from the shell's intake row (shared/layout/collar.ts); rows of its own would be lost.
+    if (part.role === 'intake-collar') {
+      if (part.sideRows.length > 0) problems.push({ path: `parts.${p}.sideRows`, message: 'an intake collar takes its holes from the shell’s intake row: remove its own rows' });
+      if (part.endPatterns.length > 0) problems.push({ path: `parts.${p}.endPatterns`, message: 'an intake collar is a band with no can end: remove its rings' });
+    }
+  });
+  design.parts.forEach((part, p) => {
     // The flat of the bottom must be left: a rim as wide as the can's radius leaves no bottom to drill.
     if (2 * part.vessel.bottomRimInsetMm >= part.vessel.outerDiameterMm) problems.push({ path: `parts.${p}.vessel.bottomRimInsetMm`, message: 'leaves no flat bottom: it must be less than half the diameter' });
   });

@@ -57,8 +57,10 @@ export function drawStrip(
     say(sx(0) + 1.5, piece.reference === 'top' ? sy(0) - 1.5 : sy(H) + 4, text.seamStart, type.small);
   }
   if (L >= from && L <= to) ctx.line(sx(L), sy(0), sx(L), sy(H), { ...strokes.guide, color: 'ink' });
-  if (piece.reference === 'bottom') say(sx(body ? body[0] : from) + 1.5, sy(0) - 1.5, text.bottomEdge, type.tiny);
-  else say(sx(body ? body[0] : from) + 1.5, sy(H) + 2.6, text.topEdge, type.tiny);
+  // On a later tile, past the shared band where the join crosses stand.
+  const noteX = sx(Math.max(body ? body[0] : from, from + (placement.tile?.joinLeft ? placement.tile.overlapMm : 0))) + 1.5;
+  if (piece.reference === 'bottom') say(noteX, sy(0) - 1.5, text.bottomEdge, type.tiny);
+  else say(noteX, sy(H) + 2.6, text.topEdge, type.tiny);
 
   for (const mark of layout.marks) {
     if (mark.kind !== 'row-line' || mark.pieceId !== piece.id) continue;
@@ -66,12 +68,14 @@ export function drawStrip(
     if (span) ctx.line(sx(span[0]), canY(mark.yMm), sx(span[1]), canY(mark.yMm), strokes.guide);
   }
 
-  for (const mark of layout.marks) if (mark.kind === 'collar-scale' && mark.pieceId === piece.id) reserved.push(...drawCollarScale(ctx, mark.ticks, H, from, to, sx, sy, text));
+  for (const mark of layout.marks) if (mark.kind === 'collar-scale' && mark.pieceId === piece.id) reserved.push(...drawCollarScale(ctx, mark.ticks, H, from, to, sx, sy, text, piece.lengthMm));
   if (placement.tile) {
     const pieceHoles = layout.holes.filter((h) => h.pieceId === piece.id).map((h) => ({ xMm: h.xMm, yMm: h.yMm - piece.fromYMm, reachMm: h.diameterMm / 2 + MARK_REACH_PAST_HOLE_MM }));
     reserved.push(...drawJoins(ctx, placement, H, sx, sy, text, pieceHoles));
   }
-  reserved.push(...drawWrapCheck(ctx, piece, from, to, sx, sy, text));
+  // Along the top edge, unless a collar's scale has that edge: then along the bottom.
+  const collar = layout.marks.some((m) => m.kind === 'collar-scale' && m.pieceId === piece.id);
+  reserved.push(...drawWrapCheck(ctx, piece, from, to, sx, sy, text, !collar));
 
   const rows = new Map<string, Hole[]>();
   for (const hole of layout.holes) {
@@ -139,22 +143,25 @@ export const WRAP_ZERO_TICK_MM = 5;
 const WRAP_TICK_MM = 3;
 
 /**
- * The wrap check round the end line: ticks down from the top edge at L + pi x d for each step d,
+ * The wrap check round the end line: ticks in from the top (or bottom) edge at L + pi x d for each step d,
  * 0 on the end line itself. Wrapped tight round the can, the strip's start edge meets 0 when the
  * can is as wide as the design says; at +1 it is 1 mm wider across. Returns the words' rects.
  */
-function drawWrapCheck(ctx: DrawingContext, piece: WrapStripPiece, from: number, to: number, sx: (x: number) => number, sy: (y: number) => number, text: KitText): Rect[] {
+function drawWrapCheck(ctx: DrawingContext, piece: WrapStripPiece, from: number, to: number, sx: (x: number) => number, sy: (y: number) => number, text: KitText, atTop: boolean): Rect[] {
   const H = piece.heightMm;
+  // Strip y along a tick: from the edge into the strip.
+  const inward = (mm: number) => (atTop ? H - mm : mm);
   const rects: Rect[] = [];
   const shown = wrapCheckSteps(text.units)
     .map((step) => ({ ...step, x: piece.lengthMm + Math.PI * step.deltaMm }))
     .filter((t) => t.x >= from - 1e-9 && t.x <= to + 1e-9);
   for (const tick of shown) {
     const long = tick.deltaMm === 0;
-    ctx.line(sx(tick.x), sy(H), sx(tick.x), sy(H - (long ? WRAP_ZERO_TICK_MM : WRAP_TICK_MM)), strokes.tick);
+    const length = long ? WRAP_ZERO_TICK_MM : WRAP_TICK_MM;
+    ctx.line(sx(tick.x), sy(inward(0)), sx(tick.x), sy(inward(length)), strokes.tick);
     if (!tick.label) continue;
-    // The 0 stands beside its tick, off the end line that runs through it; the others under theirs.
-    const y = long ? sy(H - WRAP_ZERO_TICK_MM) : sy(H - WRAP_TICK_MM - 2.2);
+    // The 0 stands beside its tick, off the end line that runs through it; the others past their tick's end.
+    const y = long ? sy(atTop ? H - length : length - 1.5) : atTop ? sy(H - length - 2.2) : sy(length + 0.6);
     const x = long ? sx(tick.x) + 0.8 : sx(tick.x);
     const anchor = long ? 'start' : 'middle';
     ctx.text(x, y, tick.label, { ...type.tiny, anchor, color: 'ink' });
@@ -268,6 +275,7 @@ function drawCollarScale(
   sx: (x: number) => number,
   sy: (y: number) => number,
   text: KitText,
+  endMm?: number,
 ): Rect[] {
   const shown = ticks.filter((t) => t.xMm >= from - 1e-9 && t.xMm <= to + 1e-9);
   if (shown.length === 0) return [];
@@ -275,9 +283,11 @@ function drawCollarScale(
   for (const tick of shown) {
     ctx.line(sx(tick.xMm), sy(H), sx(tick.xMm), sy(H - 3), strokes.edge);
     // Upright, hanging from the tick: marks a few mm apart still read apart.
-    ctx.text(sx(tick.xMm) + 0.7, sy(H - 3.5), tick.label, { ...type.tiny, anchor: 'end', rotateDeg: 90 });
+    // A tick on the end line gets its label right of the line, clear of its dashes.
+    const shift = endMm !== undefined && Math.abs(tick.xMm - endMm) < 1.2 ? 1.8 : 0;
+    ctx.text(sx(tick.xMm) + 0.7 + shift, sy(H - 3.5), tick.label, { ...type.tiny, anchor: 'end', rotateDeg: 90 });
     // Turned upright, the label hangs below the tick, a text height wide.
-    rects.push({ x: sx(tick.xMm) - 1.5, y: sy(H), width: 2.4, height: 3.5 + estimateTextWidthMm(tick.label, type.tiny.sizeMm) });
+    rects.push({ x: sx(tick.xMm) - 1.5 + shift, y: sy(H), width: 2.4, height: 3.5 + estimateTextWidthMm(tick.label, type.tiny.sizeMm) });
   }
   const leftmost = Math.min(...shown.map((t) => t.xMm));
   ctx.text(sx(leftmost) - 2, sy(H) + 2.6, text.collarScale, { ...type.tiny, anchor: 'end' });

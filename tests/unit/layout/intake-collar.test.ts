@@ -133,4 +133,12 @@ describe('an intake collar over the shell intake row', () => {
     const layout = layoutDesign(stove([chamber, shell, part]));
     expect(layout.findings.filter((f) => f.rule === 'collar-too-tight' || f.rule === 'collar-loose')).toEqual([]);
   });
+
+  it('refuses rows and rings of its own, which the collar would not drill', () => {
+    const withRow = { ...collar(), sideRows: [{ id: 'extra', group: 'intake' as const, drillId: 'mm:10', count: 4, height: { from: 'bottom' as const, mm: 10 }, startDeg: 0 }] };
+    const refused = layoutDocument({ schemaVersion: 1, name: 'Collar test', parts: [chamber, shell, withRow] });
+    expect(refused.ok).toBe(false);
+    if (refused.ok) return;
+    expect(refused.problems).toContainEqual({ path: 'parts.2.sideRows', message: 'an intake collar takes its holes from the shell’s intake row: remove its own rows' });
+  });
 });

@@ -115,9 +115,30 @@ export function PartEditor({ partIndex, partCount, units, onMove, onRemove }: Pa
       </fieldset>
       <VesselField partIndex={partIndex} units={units} partName={partName} />
       {role === 'intake-collar' ? (
-        <p className="rounded-md border border-rule bg-white p-3 text-sm">
-          A band cut from a can wall, wrapped round the outer shell over its intake row. Its holes follow that row: the same drill at the same angles, so fully open they sit over the shell’s. Turn it round the shell to close the intake partly; its printed band carries a scale (open, 3/4, 1/2, 1/4, closed) to read against the shell’s seam.
-        </p>
+        <>
+          <p className="rounded-md border border-rule bg-white p-3 text-sm">
+            A band cut from a can wall, wrapped round the outer shell over its intake row. Its holes follow that row: the same drill at the same angles, so fully open they sit over the shell’s. Turn it round the shell to close the intake partly; its printed band carries a scale (open, 3/4, 1/2, 1/4, closed) to read against the shell’s seam.
+          </p>
+          {(rows.fields.length > 0 || patterns.fields.length > 0) && (
+            <div role="alert" className="rounded-md border border-danger bg-white p-3 text-sm text-danger">
+              <p>
+                This part still has {rows.fields.length > 0 ? `${rows.fields.length} row${rows.fields.length === 1 ? '' : 's'} round the wall` : ''}
+                {rows.fields.length > 0 && patterns.fields.length > 0 ? ' and ' : ''}
+                {patterns.fields.length > 0 ? `${patterns.fields.length} ring pattern${patterns.fields.length === 1 ? '' : 's'}` : ''} from before it was a collar. A collar takes its holes from the shell, so these must go before the design can be saved.
+              </p>
+              <button
+                type="button"
+                className={`${small} mt-2`}
+                onClick={() => {
+                  rows.remove();
+                  patterns.remove();
+                }}
+              >
+                Remove them
+              </button>
+            </div>
+          )}
+        </>
       ) : (
         <>
           {rows.fields.map((field, r) => (
