@@ -49,6 +49,16 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     expect(await page.getByLabel('Design name').inputValue()).toBe('Rowan’s first stove');
   });
 
+  it('refuses a name the printed kit cannot show, naming the character, and keeps what was typed', async () => {
+    const name = page.getByLabel('Design name');
+    await name.fill('Snow ☃ stove');
+    // shared/print/printable-text.ts: IBM Plex Sans carries no U+2603 SNOWMAN.
+    await page.getByText('has a character the printed kit cannot show: "☃". Use letters, digits and common punctuation.').first().waitFor();
+    expect(await name.inputValue()).toBe('Snow ☃ stove');
+    await name.fill('Rowan’s first stove');
+    await expect.poll(() => page.getByText('cannot show').count()).toBe(0);
+  });
+
   it('opens the print screen and sees every sheet drawn (not blank) and the build sheet', async () => {
     await page.getByRole('link', { name: 'Print the kit' }).click();
     await page.getByRole('heading', { name: 'Print the kit' }).waitFor();
@@ -70,7 +80,7 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     await page.screenshot({ path: artifactPath('print-1280.png'), fullPage: true });
   });
 
-  it('downloads the PDF kit: a valid PDF of Letter pages (ANSI: 8.5 x 11 in), one per sheet shown plus the build sheet', async () => {
+  it('downloads the PDF kit: a valid PDF of Letter pages (ANSI: 8.5 x 11 in), one per sheet shown plus the sheet map and the build sheet', async () => {
     const shown = await page.getByRole('list', { name: 'Sheets of the kit' }).getByRole('img').count();
     const downloading = page.waitForEvent('download');
     await page.getByRole('button', { name: 'Download PDF kit' }).click();
@@ -78,7 +88,9 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     const path = artifactPath('visitor-kit.pdf');
     await download.saveAs(path);
     const doc = await PDFDocument.load(readFileSync(path));
-    expect(doc.getPageCount()).toBe(shown + 1);
+    expect(doc.getPageCount()).toBe(shown + 2);
+    // No printer profile chosen: the file name says so.
+    expect(download.suggestedFilename()).toBe('rowan-s-first-stove-kit-no-printer-profile.pdf');
     for (const p of doc.getPages()) {
       expect(p.getWidth()).toBeCloseTo(215.9 * PT_PER_MM, 1);
       expect(p.getHeight()).toBeCloseTo(279.4 * PT_PER_MM, 1);
@@ -103,8 +115,9 @@ describe.skipIf(skip)('a visitor designs a stove and prints it', () => {
     const requested = page.waitForRequest((r) => r.url().endsWith('/api/render/pdf'));
     const downloading = page.waitForEvent('download');
     await page.getByRole('button', { name: 'Download PDF kit' }).click();
-    expect((await requested).postDataJSON().printer).toEqual({ measuredXMm: 152.25, measuredYMm: 198.6 });
-    await downloading;
+    expect((await requested).postDataJSON().printer).toEqual({ name: 'Garage inkjet', measuredXMm: 152.25, measuredYMm: 198.6 });
+    // The profile's name goes in the file name (and on every sheet: tests/render/kit-marks.test.ts).
+    expect((await downloading).suggestedFilename()).toBe('rowan-s-first-stove-kit-for-garage-inkjet.pdf');
 
     await printer.selectOption({ label: 'No correction: print as drawn' });
     const plain = page.waitForRequest((r) => r.url().endsWith('/api/render/pdf'));
