@@ -4,6 +4,7 @@ import type { DrawingContext } from '../drawing/drawing-context.ts';
 import { SAFETY_NOTES } from './build-sheet.ts';
 import { pageWriter } from './draw-build-sheet.ts';
 import { strokes, type } from './draw-style.ts';
+import { printableOrReplaced } from './printable-text.ts';
 import { describeDrill, describeLength, type KitText } from './kit-text.ts';
 
 /** What a workshop's class pack says about the session and the group. */
@@ -48,14 +49,16 @@ export function classPackContent(design: Design, layout: Layout, pilots: Readonl
   }
   return {
     title: `${meta.title}: class pack`,
-    lines: [`${meta.when}${meta.place ? `, ${meta.place}` : ''}`, `Instructor: ${meta.instructor}`, `Kit: ${design.name}, for ${meta.builds} build${meta.builds === 1 ? '' : 's'}`],
+    // Account names are the people's own and were never checked against the fonts: any character
+    // the fonts lack prints as "?" rather than as nothing.
+    lines: [`${meta.when}${meta.place ? `, ${meta.place}` : ''}`, `Instructor: ${printableOrReplaced(meta.instructor)}`, `Kit: ${design.name}, for ${meta.builds} build${meta.builds === 1 ? '' : 's'}`],
     builds: meta.builds,
     cans: [...cans].map(([words, perBuild]) => ({ text: words, perBuild, total: perBuild * meta.builds })),
     drills: [...drills]
       .sort(([, a], [, b]) => a.diameterMm - b.diameterMm)
       .map(([drillId, d]) => ({ drillId, drill: d.drill, ...(pilots.get(drillId) ? { pilot: pilots.get(drillId) } : {}), perBuild: d.count, total: d.count * meta.builds })),
     safety: SAFETY_NOTES,
-    names: meta.names,
+    names: meta.names.map((name) => printableOrReplaced(name)),
   };
 }
 

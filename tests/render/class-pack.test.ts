@@ -95,6 +95,16 @@ describe('the class pack for a workshop', () => {
   });
 });
 
+describe('names on the class pack', () => {
+  it('prints a roster name with a character the fonts lack, that character as "?" (no font carries U+2603 SNOWMAN)', async () => {
+    const pack = await renderClassPackPdf({ design: template('pint-can-stove'), print: { paper: 'letter' } }, { ...meta(2, ['Ada ☃ Example', 'Жанна Ζήτα']), instructor: 'Robin ☃' });
+    const pages = await readPdfText(pack.bytes);
+    expect(pages[0]).toContain('Instructor: Robin ?');
+    expect(pages[1]).toContain('Ada ? Example');
+    expect(pages[1]).toContain('Жанна Ζήτα');
+  });
+});
+
 describe('a class pack for a full workshop', () => {
   it('carries the sign-off list over pages until every name of 200 has its line', async () => {
     const design = template('pint-can-stove');

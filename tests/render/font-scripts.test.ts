@@ -41,6 +41,17 @@ describe('text in any script the kit fonts carry', () => {
     expect(embeddedFonts(bytes).length).toBeGreaterThan(2);
   });
 
+  it('prints a letter typed with a combining accent as the one composed letter (Unicode NFC)', async () => {
+    // "S" + U+0301 COMBINING ACUTE ACCENT composes to U+015A "Ś" (Unicode Standard Annex #15).
+    const typed = 'S\u0301liwka';
+    const design = template('pint-can-stove');
+    design.name = typed;
+    const { bytes } = await renderKitPdf({ design, print: { paper: 'letter' } });
+    const lines = poppler('pdftotext', bytes, ['-enc', 'UTF-8']).split('\n').map((line) => line.trim());
+    expect(lines).toContain('\u015Aliwka');
+    expect(lines.some((line) => line.includes('\u0301'))).toBe(false);
+  });
+
   it('embeds only the latin subset, one font a weight, for a Latin-only kit', async () => {
     const { bytes } = await renderKitPdf({ design: template('pint-can-stove'), print: { paper: 'letter' } });
     const fonts = embeddedFonts(bytes);

@@ -1,5 +1,6 @@
 import type { PDFFont } from 'pdf-lib';
 import { palette } from '../../../shared/drawing/drawing-context.ts';
+import { isPrintableCharacter } from '../../../shared/print/printable-text.ts';
 import type { DrawingContext, InkColor, ShapeStyle, Stroke, TextStyle } from '../../../shared/drawing/drawing-context.ts';
 import { AsciiBuffer } from './ascii-buffer.ts';
 import type { FontWeight, PlexFonts } from './fonts.ts';
@@ -88,8 +89,12 @@ export class PdfPageContext implements DrawingContext {
     this.paint(`q 1 0 0 1 ${fmt(cx)} ${fmt(cy)} cm ${this.circlePath(r)}`, style, ' Q');
   }
 
-  text(x: number, y: number, text: string, style: TextStyle): void {
-    if (text.length === 0) return;
+  text(x: number, y: number, words: string, style: TextStyle): void {
+    if (words.length === 0) return;
+    // Composed (NFC): "S" + combining acute prints as the one glyph "Ś" the fonts carry, placed by
+    // the font's designer rather than stacked by width. Kept as typed where composing finds no glyph.
+    const composed = words.normalize('NFC');
+    const text = composed === words || [...composed].every((char) => isPrintableCharacter(char)) ? composed : words;
     const runs = splitRuns(this.fonts, style.weight ?? 'regular', text);
     const size = style.sizeMm;
     const shift = style.anchor === 'middle' ? 0.5 : style.anchor === 'end' ? 1 : 0;
