@@ -15,9 +15,10 @@ export function drawBuildSheet(ctx: DrawingContext, content: BuildSheetContent, 
     for (const g of part.groups) write.line(`• ${g.label} (holes ${g.numbers}): ${g.count} × ${g.drill}${g.pilot ? `, pilot ${g.pilot}` : ''}`, type.label, 3);
   }
 
-  write.heading('Checks still open');
+  write.heading('Air and checks');
   write.line(content.airflow);
-  if (content.openChecks.length === 0) write.line('None: every check passed.');
+  if (content.openChecks.length === 0) write.line('Checks still open: none, every check passed.');
+  else write.line(`Checks still open: ${content.openChecks.length}`, { ...type.label, weight: 'bold' });
   for (const check of content.openChecks) write.line(`${check.severity === 'error' ? 'Error' : 'Warning'}: ${check.message}`, check.severity === 'error' ? { ...type.label, weight: 'bold' } : type.label, 3);
   if (content.openChecks.length > 0) write.line('Holes a check flagged carry a black triangle on the templates.', type.small);
 

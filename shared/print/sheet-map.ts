@@ -72,7 +72,7 @@ export function sheetMapContent(design: Pick<Design, 'name' | 'parts'>, layout: 
   }
   return {
     title: `${design.name}: sheet map`,
-    intro: `${sheets.length} sheet${sheets.length === 1 ? '' : 's'} of ${where}, numbered in the order of work: inner parts first (${parts.join(', then ')}). Cut and join each strip's parts before you tape it round its can.`,
+    intro: `${sheets.length} sheet${sheets.length === 1 ? '' : 's'} of ${where}, in the order of work: inner parts first (${parts.join(', then ')}). A sheet comes as early as the first piece it holds, so a later part may share an earlier sheet where it fitted. Cut and join each strip's parts before you tape it round its can.`,
     sheets: sheets.map((sheet) => ({ number: sheet.number, contents: describeSheetContents(sheet, layout.pieces) })),
     strips,
     numbering: `Holes are numbered 1 to ${layout.holes.length} in the same order; the build sheet and the hole table (CSV) use the same numbers.`,

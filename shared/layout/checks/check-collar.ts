@@ -21,7 +21,9 @@ export const checkCollar: Check = ({ assembly, collars }) => {
       findings.push({
         rule: 'collar-without-intake',
         severity: 'error',
-        message: `${part.name} has no intake holes to follow: give the outer shell a row of intake holes (group "intake").`,
+        message: shell
+          ? `${part.name} has no intake holes to follow: give ${shell.name} a row of holes in the shell intake group.`
+          : `${part.name} has no shell to go round: add an outer shell with a row of holes in the shell intake group, or remove the collar.`,
         numbers: {},
         holeIds: [],
         partIds: [part.partId],

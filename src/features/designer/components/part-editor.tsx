@@ -117,7 +117,7 @@ export function PartEditor({ partIndex, partCount, units, onMove, onRemove }: Pa
       {role === 'intake-collar' ? (
         <>
           <p className="rounded-md border border-rule bg-white p-3 text-sm">
-            A band cut from a can wall, wrapped round the outer shell over its intake row. Its holes follow that row: the same drill at the same angles, so fully open they sit over the shell’s. Turn it round the shell to close the intake partly; its printed band carries a scale (open, 3/4, 1/2, 1/4, closed) to read against the shell’s seam.
+            A band cut from a can wall, wrapped round the outer shell over its intake row. Its holes follow that row: the same drill at the same angles, so fully open they sit over the shell’s. Turn it round the shell to close the intake partly; its printed band carries a scale (open, 3/4, 1/2, 1/4, and closed, or the least it reaches when its holes are close together) to read against the shell’s seam.
           </p>
           {(rows.fields.length > 0 || patterns.fields.length > 0) && (
             <div role="alert" className="rounded-md border border-danger bg-white p-3 text-sm text-danger">

@@ -52,7 +52,9 @@ export function PreviewPanel({ design, layout, units, partIndex, view, onView, f
       </div>
       {stale && <StaleMark what="The preview" problem={stale} compact />}
       <div {...tabPanelProps(panelId, view)} hidden={hidden} className={`h-44 overflow-hidden rounded-lg border border-rule bg-white sm:h-80 lg:h-96 ${stale ? '[&_canvas]:opacity-60 [&_svg]:opacity-60' : ''}`}>
-        {view === 'above' ? (
+        {view === 'above' && part.role === 'intake-collar' ? (
+          <p className="p-4 text-sm text-ink-soft">{`${partName} takes its holes from the shell’s intake row, so it has none of its own to place here: its band, holes and scale are in the wall view.`}</p>
+        ) : view === 'above' ? (
           <PlanView part={part} partName={partName} onSeamChange={onSeamChange} onToggleSkip={onToggleSkip} />
         ) : view === 'assembled' ? (
           <LayoutPreview layout={layout} units={units} view={view} pieceId={pieces[0]?.id} highlight={highlight} highlightParts={highlightParts} />

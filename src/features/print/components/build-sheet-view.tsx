@@ -46,10 +46,10 @@ export function BuildSheetView({ content }: { content: BuildSheetContent }) {
           </tbody>
         ))}
       </table>
-      <h3 className="mt-4 font-semibold">Checks still open</h3>
+      <h3 className="mt-4 font-semibold">Air and checks</h3>
       <p className="mt-1">{content.airflow}</p>
       {content.openChecks.length === 0 ? (
-        <p className="mt-1">None: every check passed.</p>
+        <p className="mt-1">Checks still open: none, every check passed.</p>
       ) : (
         <ul className="mt-1 list-disc space-y-1 pl-5">
           {content.openChecks.map((check, i) => (
