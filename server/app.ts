@@ -12,6 +12,7 @@ import { createUserDirectory } from './admin/user-directory.ts';
 import type { Auth } from './auth/auth.ts';
 import { passwordMatches, sessionCookieNames } from './auth/confirm-password.ts';
 import type { Database } from './db/database.ts';
+import { compressResponses } from './http/compress-responses.ts';
 import { serveClient } from './http/client-files.ts';
 import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { createAppRateLimits, passClientAddress, type RateLimitPolicy } from './http/rate-limits.ts';
@@ -83,6 +84,8 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  // JSON, SVG and pages compressed on the fly; PDFs, photos and archives are left as they are.
+  app.use(compressResponses());
   app.use('/api', refuseControlCharactersInAddress);
   app.use('/api', limits.api);
   // better-auth checks its own routes by the same rule; this covers every other /api route.

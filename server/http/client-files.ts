@@ -1,14 +1,25 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import express, { type Express } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 
 /**
- * Serves the built SPA: hashed assets cached for a year, index.html never cached, and every
- * other GET that is not an API route answered with index.html so client routes survive a reload.
+ * Serves the built SPA: hashed assets cached for a year, as the brotli or gzip file the build
+ * wrote beside each one when the browser takes it (express-static-gzip picks the file and sets
+ * Content-Encoding and Vary), index.html never cached, and every other GET that is not an API
+ * route answered with index.html so client routes survive a reload.
  */
 export function serveClient(app: Express, clientDir: string): void {
   const indexHtml = join(clientDir, 'index.html');
-  app.use('/assets', express.static(join(clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+  app.use(
+    '/assets',
+    expressStaticGzip(join(clientDir, 'assets'), {
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
+      index: false,
+      serveStatic: { immutable: true, maxAge: '1y', fallthrough: false },
+    }),
+  );
   app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
   app.get('/{*splat}', (_req, res) => {
     if (!existsSync(indexHtml)) {
