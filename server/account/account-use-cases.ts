@@ -3,7 +3,7 @@ import { massUnitSchema, paperPreferenceSchema, temperatureUnitSchema, unitSyste
 import { defaultBurnUnits } from '../../shared/units/burn-units.ts';
 import { findDrill } from '../../shared/drills/index.ts';
 import { AppError } from '../http/app-error.ts';
-import { roleSchema } from '../../shared/account/roles.ts';
+import { roleSchema } from '../../shared/account/role-schema.ts';
 import { notFound } from '../http/app-error.ts';
 import type { AccountRepository } from './account-repository.ts';
 

@@ -1,6 +1,6 @@
 import { APIError } from 'better-auth/api';
 import { adminUserSchema, type AdminUser, type AdminUserChange, type AdminUserList } from '../../shared/account/account.ts';
-import { roleSchema } from '../../shared/account/roles.ts';
+import { roleSchema } from '../../shared/account/role-schema.ts';
 import type { Auth } from '../auth/auth.ts';
 import { AppError, notFound } from '../http/app-error.ts';
 import type { UserDirectory } from './user-directory.ts';

@@ -1,6 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { fromNodeHeaders } from 'better-auth/node';
-import { roleSchema, type Role } from '../../shared/account/roles.ts';
+import { roleSchema } from '../../shared/account/role-schema.ts';
+import type { Role } from '../../shared/account/roles.ts';
 import type { Auth } from '../auth/auth.ts';
 import { forbidden, unauthenticated } from './app-error.ts';
 

@@ -1,23 +1,11 @@
 import { z } from 'zod';
-import { massUnitSchema, paperPreferenceSchema, temperatureUnitSchema, unitSystemSchema, volumeUnitSchema } from './preferences.ts';
-import { roleSchema } from './roles.ts';
+import { accountSchema as accountWireSchema } from './account-wire.ts';
+import { roleSchema } from './role-schema.ts';
 
-/** The signed-in user as the API returns it (GET /api/account). */
-export const accountSchema = z.object({
-  id: z.string(),
-  name: z.string(),
-  email: z.string(),
-  emailVerified: z.boolean(),
-  role: roleSchema,
-  units: unitSystemSchema,
-  defaultPaper: paperPreferenceSchema,
-  drillSetIds: z.array(z.string()),
-  /** Burn log units: the maker's choice, or the ones that go with their length units. */
-  massUnit: massUnitSchema,
-  temperatureUnit: temperatureUnitSchema,
-  volumeUnit: volumeUnitSchema,
-});
-export type Account = z.infer<typeof accountSchema>;
+export type { Account } from './account-wire.ts';
+
+/** The account (GET /api/account) with the full zod build's methods, for the server and the admin screens. */
+export const accountSchema = z.object(accountWireSchema.shape);
 
 /** A row of the admin users table (GET /api/admin/users). */
 export const adminUserSchema = accountSchema.omit({ units: true, defaultPaper: true, drillSetIds: true, massUnit: true, temperatureUnit: true, volumeUnit: true }).extend({

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { massUnits, temperatureUnits, volumeUnits } from '../units/burn-units.ts';
 import { unitSystems } from '../units/length.ts';
+import { paperIds } from './account-wire.ts';
 
 export const unitSystemSchema = z.enum(unitSystems);
 export type { UnitSystem } from '../units/length.ts';
@@ -9,7 +10,7 @@ export const massUnitSchema = z.enum(massUnits);
 export const temperatureUnitSchema = z.enum(temperatureUnits);
 export const volumeUnitSchema = z.enum(volumeUnits);
 
-export const paperPreferenceSchema = z.enum(['letter', 'legal', 'tabloid', 'a4', 'a3']);
+export const paperPreferenceSchema = z.enum(paperIds);
 
 /** What a maker sets once: units (lengths, and for the burn log mass, temperature, volume), the paper their printer takes, and the drills they own. */
 export const preferencesSchema = z

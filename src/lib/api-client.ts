@@ -1,4 +1,6 @@
-import type { z } from 'zod';
+// zod's core: schemas of the full build and of zod/mini both pass, and the entry chunk (which
+// checks the session) carries only the core's parser, not the whole of zod.
+import { safeParse, type $ZodType, type output } from 'zod/v4/core';
 
 export interface FieldProblem {
   path: string;
@@ -25,7 +27,7 @@ interface RequestOptions {
 }
 
 /** Calls the API and checks the answer against a zod schema. */
-export async function apiRequest<S extends z.ZodType>(path: string, schema: S, options: RequestOptions = {}): Promise<z.output<S>> {
+export async function apiRequest<S extends $ZodType>(path: string, schema: S, options: RequestOptions = {}): Promise<output<S>> {
   const response = await fetch(path, {
     method: options.method ?? 'GET',
     headers: options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
@@ -37,13 +39,13 @@ export async function apiRequest<S extends z.ZodType>(path: string, schema: S, o
 }
 
 /** Turns an answer into the schema's value, or an ApiError in the person's words. */
-async function readAnswer<S extends z.ZodType>(response: Response, path: string, schema: S): Promise<z.output<S>> {
+async function readAnswer<S extends $ZodType>(response: Response, path: string, schema: S): Promise<output<S>> {
   const payload: unknown = await response.json().catch(() => undefined);
   if (!response.ok) {
     const error = (payload as { error?: { code?: string; message?: string; details?: { fields?: FieldProblem[] } } } | undefined)?.error;
     throw new ApiError(response.status, error?.code ?? 'HTTP_' + response.status, error?.message ?? `The server answered ${response.status}.`, error?.details?.fields ?? []);
   }
-  const parsed = schema.safeParse(payload);
+  const parsed = safeParse(schema, payload);
   if (parsed.success) return parsed.data;
   // A proxy's page or a server of another version: say so plainly, never the checker's own words.
   console.error(`Unexpected answer from ${path}`, parsed.error.issues);
@@ -69,7 +71,7 @@ export async function fetchRetryingWhenBusy(
 }
 
 /** Sends one file as multipart form data (the browser sets the boundary), with any text fields before it, and checks the answer. */
-export async function apiUpload<S extends z.ZodType>(path: string, schema: S, field: string, file: Blob, fileName: string, fields: Record<string, string> = {}): Promise<z.output<S>> {
+export async function apiUpload<S extends $ZodType>(path: string, schema: S, field: string, file: Blob, fileName: string, fields: Record<string, string> = {}): Promise<output<S>> {
   const form = new FormData();
   for (const [name, value] of Object.entries(fields)) form.append(name, value);
   form.append(field, file, fileName);

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { accountSchema, type Account } from '../../../../shared/account/account.ts';
+import { accountSchema, type Account } from '../../../../shared/account/account-wire.ts';
 import { ApiError, apiRequest } from '../../../lib/api-client.ts';
 
 export const accountQueryKey = ['account'] as const;

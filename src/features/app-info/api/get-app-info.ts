@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { apiRequest } from '../../../lib/api-client.ts';
 
 const appInfoSchema = z.object({ name: z.string(), version: z.string(), devMailbox: z.boolean() });
