@@ -64,7 +64,9 @@ export function drawDisc(
     const out: [number, number] = r > 1e-6 ? [hole.xMm / r, -hole.yMm / r] : [0, 1];
     const ring = `${hole.sourceId}@${Math.round(r * 10)}`;
     const mark = { x: cx + hole.xMm, y: cy - hole.yMm, radiusMm: hole.diameterMm / 2, reachMm: hole.diameterMm / 2 + MARK_REACH_PAST_HOLE_MM, number, towards: numberPlaces(out) };
-    rows.set(ring, [...(rows.get(ring) ?? []), mark]);
+    const row = rows.get(ring);
+    if (row) row.push(mark);
+    else rows.set(ring, [mark]);
   }
   // Numbers stay on the paper disc, clear of the centre cross and any opening's words.
   const reserved = [{ x: cx - 4, y: cy - 4, width: 8, height: 8 }, ...openingWords];
